@@ -1,0 +1,64 @@
+import { IonApp, IonRouterOutlet } from '@ionic/react';
+import { IonReactRouter } from '@ionic/react-router';
+import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
+import type { ReactNode } from 'react';
+import { Navigate, Route } from 'react-router-dom';
+import { lazyPage } from './components/lazyPage';
+import { ApiClientProvider } from './features/api/ApiClientContext';
+import type { ApiClient } from './features/api/client';
+import { homePathForRole } from './features/navigation/roleTabs';
+import { SessionProvider, useSession } from './features/session/SessionProvider';
+import type { SessionStore } from './features/session/sessionStore';
+
+const SignInPage = lazyPage(() => import('./pages/SignInPage'));
+const TabsLayout = lazyPage(() => import('./pages/TabsLayout'));
+
+/** Lets a usable session (online, or offline within its period) through; everything else goes to sign-in. */
+function RequireSession({ children }: { children: ReactNode }) {
+  const { status } = useSession();
+  if (status === 'online' || status === 'offline') return children;
+  return <Navigate to="/signin" replace />;
+}
+
+/** Sends "/" to the person's first tab, or to sign-in. */
+function HomeRedirect() {
+  const { session, status } = useSession();
+  const usable = session && (status === 'online' || status === 'offline');
+  return <Navigate to={usable ? homePathForRole(session.user.role) : '/signin'} replace />;
+}
+
+export interface AppProps {
+  queryClient: QueryClient;
+  apiClient: ApiClient;
+  sessionStore: SessionStore;
+  offlineSessionHours: number;
+}
+
+/** The whole app: server data, API client, session, then the routes. */
+export function App({ queryClient, apiClient, sessionStore, offlineSessionHours }: AppProps) {
+  return (
+    <QueryClientProvider client={queryClient}>
+      <ApiClientProvider client={apiClient}>
+        <SessionProvider store={sessionStore} offlineSessionHours={offlineSessionHours}>
+          <IonApp>
+            <IonReactRouter>
+              <IonRouterOutlet>
+                <Route path="/signin" element={<SignInPage />} />
+                <Route
+                  path="/tabs/*"
+                  element={
+                    <RequireSession>
+                      <TabsLayout />
+                    </RequireSession>
+                  }
+                />
+                <Route path="/" element={<HomeRedirect />} />
+                <Route path="*" element={<HomeRedirect />} />
+              </IonRouterOutlet>
+            </IonReactRouter>
+          </IonApp>
+        </SessionProvider>
+      </ApiClientProvider>
+    </QueryClientProvider>
+  );
+}

@@ -1,0 +1,104 @@
+import type { AuthResponse } from '../session/types';
+import { ApiError } from './apiError';
+
+/** Where the client reads and keeps the session's tokens (the session store in the app). */
+export interface TokenSource {
+  current(): { accessToken: string; refreshToken: string } | undefined;
+  save(auth: AuthResponse): Promise<unknown>;
+  clear(): Promise<void>;
+}
+
+export interface RequestOptions {
+  method?: 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
+  /** Sent as JSON. */
+  body?: unknown;
+  /** Adds the bearer token and refreshes it on a 401 (default true). */
+  auth?: boolean;
+  signal?: AbortSignal;
+}
+
+/** The one door to the API: feature modules call this, nothing else calls fetch. */
+export interface ApiClient {
+  request<T>(path: string, options?: RequestOptions): Promise<T>;
+}
+
+export interface ApiClientOptions {
+  tokens: TokenSource;
+  fetchFn?: typeof fetch;
+}
+
+const REFRESH_PATH = '/api/auth/refresh';
+
+/** Builds the API client: bearer token, one refresh on 401, typed errors. */
+export function createApiClient({ tokens, fetchFn = (...args) => fetch(...args) }: ApiClientOptions): ApiClient {
+  // Refresh tokens rotate, so concurrent 401s must share one refresh instead of racing and revoking each other.
+  let refreshing: Promise<string | undefined> | undefined;
+
+  async function send(path: string, options: RequestOptions, accessToken: string | undefined): Promise<Response> {
+    const headers: Record<string, string> = { Accept: 'application/json' };
+    if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+    if (accessToken) headers.Authorization = `Bearer ${accessToken}`;
+    try {
+      return await fetchFn(path, {
+        method: options.method ?? 'GET',
+        headers,
+        body: options.body === undefined ? undefined : JSON.stringify(options.body),
+        signal: options.signal,
+      });
+    } catch (cause) {
+      if (options.signal?.aborted) throw cause;
+      throw ApiError.network(path, cause);
+    }
+  }
+
+  async function refresh(): Promise<string | undefined> {
+    const refreshToken = tokens.current()?.refreshToken;
+    if (!refreshToken) return undefined;
+    const response = await send(REFRESH_PATH, { method: 'POST', body: { refreshToken } }, undefined);
+    if (response.ok) {
+      const auth = (await response.json()) as AuthResponse;
+      await tokens.save(auth);
+      return auth.accessToken;
+    }
+    // A refused refresh token ends the session; a server fault keeps it for a later attempt.
+    if (response.status === 400 || response.status === 401) {
+      await tokens.clear();
+      return undefined;
+    }
+    throw await ApiError.fromResponse(response);
+  }
+
+  function refreshOnce(): Promise<string | undefined> {
+    refreshing ??= refresh().finally(() => {
+      refreshing = undefined;
+    });
+    return refreshing;
+  }
+
+  async function read<T>(response: Response): Promise<T> {
+    if (!response.ok) throw await ApiError.fromResponse(response);
+    if (response.status === 204) return undefined as T;
+    const text = await response.text();
+    if (!text) return undefined as T;
+    try {
+      return JSON.parse(text) as T;
+    } catch {
+      throw new ApiError('invalid-response', response.status, 'The server sent an answer that is not JSON');
+    }
+  }
+
+  return {
+    async request<T>(path: string, options: RequestOptions = {}): Promise<T> {
+      const auth = options.auth ?? true;
+      const usedToken = auth ? tokens.current()?.accessToken : undefined;
+      const first = await send(path, options, usedToken);
+      if (first.status !== 401 || !usedToken) return read<T>(first);
+
+      // Another request may already have refreshed while this one was in flight: reuse its token.
+      const latest = tokens.current()?.accessToken;
+      const nextToken = latest && latest !== usedToken ? latest : await refreshOnce();
+      if (!nextToken) return read<T>(first);
+      return read<T>(await send(path, options, nextToken));
+    },
+  };
+}

@@ -1,0 +1,30 @@
+import { queryOptions } from '@tanstack/react-query';
+import type { ApiClient } from '../api/client';
+import type { AuthResponse, Credentials, SessionUser } from './types';
+
+/** Query keys of the session feature. */
+export const sessionKeys = {
+  all: ['session'] as const,
+  me: () => [...sessionKeys.all, 'me'] as const,
+};
+
+/** Signs in with email and password. */
+export function login(client: ApiClient, credentials: Credentials): Promise<AuthResponse> {
+  return client.request<AuthResponse>('/api/auth/login', { method: 'POST', body: credentials, auth: false });
+}
+
+/** Revokes the refresh token on the server. */
+export function logout(client: ApiClient, refreshToken: string): Promise<void> {
+  return client.request<void>('/api/auth/logout', { method: 'POST', body: { refreshToken }, auth: false });
+}
+
+/** Asks the server who the token belongs to; succeeding confirms the session. */
+export function meQuery(client: ApiClient) {
+  return queryOptions({
+    queryKey: sessionKeys.me(),
+    queryFn: ({ signal }) => client.request<SessionUser>('/api/me', { signal }),
+    // Re-confirm now and then so a tablet left online does not run out its offline period.
+    refetchInterval: 15 * 60_000,
+    staleTime: 60_000,
+  });
+}

@@ -1,0 +1,55 @@
+import { StrictMode } from 'react';
+import { createRoot } from 'react-dom/client';
+import { setupIonicReact } from '@ionic/react';
+import { QueryClient } from '@tanstack/react-query';
+import { registerSW } from 'virtual:pwa-register';
+
+// Only the Ionic CSS the shell needs; the palette and layout are our own (theme/).
+import '@ionic/react/css/core.css';
+import '@ionic/react/css/normalize.css';
+import '@ionic/react/css/structure.css';
+import '@fontsource/atkinson-hyperlegible/400.css';
+import '@fontsource/atkinson-hyperlegible/700.css';
+import './theme/variables.css';
+import './theme/shell.css';
+
+import { App } from './App';
+import { appConfig } from './config/appConfig';
+import { openDb } from './db/db';
+import { createApiClient } from './features/api/client';
+import { applyThemePreference } from './features/preferences/themePreference';
+import { createSessionStore } from './features/session/sessionStore';
+import { initI18n } from './i18n';
+
+/** Opens the database, restores the session and renders; nothing waits on the network. */
+async function start(): Promise<void> {
+  applyThemePreference();
+  setupIonicReact({ mode: 'md' });
+  const [db] = await Promise.all([openDb(), initI18n()]);
+  const sessionStore = createSessionStore(db.session);
+  await sessionStore.load();
+  const apiClient = createApiClient({ tokens: sessionStore });
+  const queryClient = new QueryClient({
+    defaultOptions: { queries: { networkMode: 'online', retry: 1 } },
+  });
+  createRoot(document.getElementById('root')!).render(
+    <StrictMode>
+      <App
+        queryClient={queryClient}
+        apiClient={apiClient}
+        sessionStore={sessionStore}
+        offlineSessionHours={appConfig.offlineSessionHours}
+      />
+    </StrictMode>,
+  );
+  // The service worker precaches the shell so a reload without network still renders it.
+  registerSW({ immediate: true });
+}
+
+start().catch((error: unknown) => {
+  const root = document.getElementById('root');
+  if (root) {
+    root.textContent = `Siteband could not start: ${error instanceof Error ? error.message : String(error)}`;
+  }
+  console.error(error);
+});

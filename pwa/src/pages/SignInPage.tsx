@@ -1,0 +1,123 @@
+import { useEffect, useRef, useState, type FormEvent } from 'react';
+import { IonButton, IonContent, IonInput, IonPage } from '@ionic/react';
+import { Navigate, useNavigate } from 'react-router-dom';
+import { useTranslation } from 'react-i18next';
+import { BrandMark } from '../components/BrandMark';
+import { ConnectionBadge } from '../components/ConnectionBadge';
+import { homePathForRole } from '../features/navigation/roleTabs';
+import { useOnlineStatus } from '../features/network/onlineStatus';
+import { useSession } from '../features/session/SessionProvider';
+import { signInErrorMessage } from '../features/session/signInErrorMessage';
+import { formatHours } from '../i18n/format';
+
+/** Email and password sign-in; also where an ended offline session sends the person. */
+export default function SignInPage() {
+  const { t, i18n } = useTranslation();
+  const navigate = useNavigate();
+  const online = useOnlineStatus();
+  const { session, status, signIn, signOut, offlineSessionHours } = useSession();
+  const [email, setEmail] = useState('');
+  const [password, setPassword] = useState('');
+  const [error, setError] = useState<string>();
+  const [busy, setBusy] = useState(false);
+  const [sessionEnded, setSessionEnded] = useState(status === 'expired');
+  const errorRef = useRef<HTMLParagraphElement>(null);
+
+  useEffect(() => {
+    document.title = t('app.documentTitle', { page: t('signIn.title') });
+  }, [t]);
+
+  // An ended session is revoked on the server as soon as there is a connection to do it.
+  useEffect(() => {
+    if (status !== 'expired') return;
+    setSessionEnded(true);
+    if (online) void signOut();
+  }, [status, online, signOut]);
+
+  useEffect(() => {
+    if (error) errorRef.current?.focus();
+  }, [error]);
+
+  if (session && (status === 'online' || status === 'offline') && !busy) {
+    return <Navigate to={homePathForRole(session.user.role)} replace />;
+  }
+
+  async function submit(event: FormEvent) {
+    event.preventDefault();
+    if (!email.trim() || !password) {
+      setError(t('signIn.errors.missing'));
+      return;
+    }
+    setBusy(true);
+    setError(undefined);
+    try {
+      const signedIn = await signIn({ email: email.trim(), password });
+      setPassword('');
+      navigate(homePathForRole(signedIn.user.role), { replace: true });
+    } catch (caught) {
+      setError(signInErrorMessage(caught, t));
+    } finally {
+      setBusy(false);
+    }
+  }
+
+  return (
+    <IonPage>
+      <IonContent className="sb-signin">
+        <main className="sb-signin__layout">
+          <div className="sb-signin__top">
+            <BrandMark size={56} />
+            <ConnectionBadge />
+          </div>
+          <p className="sb-signin__tagline">{t('app.tagline')}</p>
+          <section className="sb-panel sb-signin__card" aria-labelledby="signin-title">
+            <h1 id="signin-title" className="sb-page-title">
+              {t('signIn.title')}
+            </h1>
+            <p className="sb-muted">{t('signIn.intro', { hours: formatHours(offlineSessionHours, i18n.language) })}</p>
+            {sessionEnded && (
+              <p className="sb-notice" role="status">
+                {t('signIn.expired')} {!online && t('signIn.expiredOffline')}
+              </p>
+            )}
+            <form onSubmit={submit} noValidate>
+              <IonInput
+                className="sb-input"
+                label={t('signIn.email')}
+                labelPlacement="stacked"
+                fill="outline"
+                type="email"
+                inputmode="email"
+                autocomplete="username"
+                name="email"
+                required
+                value={email}
+                onIonInput={(e) => setEmail(String(e.detail.value ?? ''))}
+              />
+              <IonInput
+                className="sb-input"
+                label={t('signIn.password')}
+                labelPlacement="stacked"
+                fill="outline"
+                type="password"
+                autocomplete="current-password"
+                name="password"
+                required
+                value={password}
+                onIonInput={(e) => setPassword(String(e.detail.value ?? ''))}
+              />
+              {error && (
+                <p className="sb-error" role="alert" tabIndex={-1} ref={errorRef}>
+                  {error}
+                </p>
+              )}
+              <IonButton type="submit" expand="block" className="sb-primary" disabled={busy}>
+                {busy ? t('signIn.submitting') : t('signIn.submit')}
+              </IonButton>
+            </form>
+          </section>
+        </main>
+      </IonContent>
+    </IonPage>
+  );
+}
