@@ -36,3 +36,26 @@ export interface Peak {
   /** Height relative to the tallest peak of the scan, 0–1. */
   readonly relativeHeight: number;
 }
+
+/** Why a peak is kept apart from the sample's bands. */
+export type PeakFlag = 'atmospheric-co2' | 'water-vapour' | 'atr-diamond';
+
+/** A peak that is probably not the sample's own: atmospheric residue or the ATR crystal. */
+export interface FlaggedPeak extends Peak {
+  readonly flag: PeakFlag;
+  /** A sentence saying why, for the scan view. */
+  readonly reason: string;
+}
+
+/** Whether a processed scan can be trusted for identification, and why not. */
+export interface ScanQuality {
+  /** Tallest sample peak divided by the robust noise level. */
+  readonly snr: number;
+  /** The detector clipped (flat top at the maximum). */
+  readonly saturated: boolean;
+  /** Cosmic-ray spikes replaced (Raman only; 0 for IR). */
+  readonly spikesRemoved: number;
+  /** False when the scan is too weak, saturated or shows too few peaks; reasons say which. */
+  readonly reliable: boolean;
+  readonly reasons: readonly string[];
+}

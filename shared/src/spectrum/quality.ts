@@ -1,0 +1,30 @@
+import type { Peak, ScanQuality } from './types.js';
+
+/** What the quality verdict looks at. */
+export interface QualityInput {
+  readonly peaks: readonly Peak[];
+  readonly noiseSigma: number;
+  readonly saturation: { readonly saturated: boolean; readonly longestRun: number };
+  readonly spikesRemoved: number;
+  readonly minSnr: number;
+  readonly minPeaks: number;
+}
+
+/** Decide whether a processed scan can be used for identification, with a reason for each failure. */
+export function judgeQuality(input: QualityInput): ScanQuality {
+  const tallest = input.peaks.reduce((m, p) => Math.max(m, p.height), 0);
+  const snr = input.noiseSigma > 0 ? tallest / input.noiseSigma : tallest > 0 ? Infinity : 0;
+  const reasons: string[] = [];
+  if (snr < input.minSnr) {
+    reasons.push(`low signal-to-noise: ${snr.toFixed(1)} (at least ${input.minSnr} needed); rescan with longer integration or more sample`);
+  }
+  if (input.saturation.saturated) {
+    reasons.push(
+      `detector saturation: flat top over ${input.saturation.longestRun} points; reduce integration time or laser power, or use less sample`,
+    );
+  }
+  if (input.peaks.length < input.minPeaks) {
+    reasons.push(`too few peaks: ${input.peaks.length} found, at least ${input.minPeaks} needed`);
+  }
+  return { snr, saturated: input.saturation.saturated, spikesRemoved: input.spikesRemoved, reliable: reasons.length === 0, reasons };
+}
