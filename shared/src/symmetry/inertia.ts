@@ -1,0 +1,39 @@
+/** Principal moments of inertia and which principal axis each Cartesian axis lies along. */
+import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
+import type { Atom } from './types.js';
+import type { CartesianComponent } from './group-types.js';
+
+/** Principal moments (u·Å², ascending: a ≤ b ≤ c) and the inertial axis nearest to each of x, y, z. */
+export interface PrincipalAxes {
+  readonly moments: readonly [number, number, number];
+  readonly axisOf: Readonly<Record<CartesianComponent, 'a' | 'b' | 'c'>>;
+}
+
+/** Inertia tensor about the centre of mass, diagonalised; `massOf` gives each atom's mass in u. */
+export function principalAxes(atoms: readonly Atom[], massOf: (atom: Atom) => number): PrincipalAxes {
+  const masses = atoms.map((a, i) => {
+    const m = massOf(a);
+    if (!(m > 0)) throw new RangeError(`atom ${i + 1} (${a.element}): no mass known`);
+    return m;
+  });
+  const total = masses.reduce((s, m) => s + m, 0);
+  const com = [0, 1, 2].map((k) => atoms.reduce((s, a, i) => s + masses[i] * a.position[k], 0) / total);
+  const t = Matrix.zeros(3, 3);
+  atoms.forEach((a, i) => {
+    const r = [0, 1, 2].map((k) => a.position[k] - com[k]);
+    const r2 = r[0] ** 2 + r[1] ** 2 + r[2] ** 2;
+    for (let p = 0; p < 3; p++) for (let q = 0; q < 3; q++) t.set(p, q, t.get(p, q) + masses[i] * ((p === q ? r2 : 0) - r[p] * r[q]));
+  });
+  const eig = new EigenvalueDecomposition(t, { assumeSymmetric: true });
+  const order = [0, 1, 2].sort((p, q) => eig.realEigenvalues[p] - eig.realEigenvalues[q]);
+  const names = ['a', 'b', 'c'] as const;
+  const nearest = (k: number) => {
+    // The inertial axis with the largest projection on Cartesian axis k.
+    const w = order.map((col) => Math.abs(eig.eigenvectorMatrix.get(k, col)));
+    return names[w.indexOf(Math.max(...w))];
+  };
+  return {
+    moments: order.map((col) => eig.realEigenvalues[col]) as unknown as [number, number, number],
+    axisOf: { x: nearest(0), y: nearest(1), z: nearest(2) },
+  };
+}
