@@ -13,11 +13,8 @@ const NON_FINITE = /^[+-]?(nan|inf|infinity)$/i;
  * allowed) with an optional header line naming the columns and their units.
  */
 export function importDelimited(text: string, options: ImportOptions, minPoints: number): Spectrum {
-  const parsed = Papa.parse<string[]>(text, {
-    delimitersToGuess: ['\t', ';', ',', ' '],
-    skipEmptyLines: false,
-  });
-  const delimiter = parsed.meta.delimiter;
+  const delimiter = guessDelimiter(text);
+  const parsed = Papa.parse<string[]>(text, { delimiter, skipEmptyLines: false });
   const rows = parsed.data.map((row) => (delimiter === ' ' ? row.filter((c) => c.trim() !== '') : row).map((c) => c.trim()));
   // A comma cannot be both the delimiter and the decimal mark; elsewhere "1,5" means 1.5.
   const decimalComma = delimiter !== ',';
@@ -73,6 +70,17 @@ export function importDelimited(text: string, options: ImportOptions, minPoints:
     ...(options.excitationNm !== undefined ? { excitationNm: options.excitationNm } : {}),
     ...(options.fileName ? { title: options.fileName } : {}),
   });
+}
+
+/**
+ * Choose the delimiter from the first lines: tab, then semicolon, then comma, else runs of
+ * spaces. Papaparse's own guess prefers the comma in "1001,4;3000,5" (decimal commas), so the
+ * order of preference is fixed here instead.
+ */
+function guessDelimiter(text: string): string {
+  const sample = text.slice(0, 20000).split(/\r?\n/).filter((l) => l.trim() !== '' && !l.trimStart().startsWith('#'));
+  for (const candidate of ['\t', ';', ',']) if (sample.some((l) => l.includes(candidate))) return candidate;
+  return ' ';
 }
 
 function isDataRow(cells: string[], decimalComma: boolean): boolean {

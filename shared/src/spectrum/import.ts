@@ -1,6 +1,6 @@
 import { importDelimited } from './import-delimited.js';
 import { SpectrumImportError } from './import-error.js';
-import { importJcampBlocks, pickJcampBlock, type JcampBlock } from './import-jcamp.js';
+import { importJcampBlocks, pickJcampBlock, type JcampImport } from './import-jcamp.js';
 import { DEFAULT_MAX_IMPORT_BYTES, DEFAULT_MIN_POINTS, type ImportOptions } from './import-options.js';
 import type { Spectrum } from './types.js';
 
@@ -16,8 +16,8 @@ export function importSpectrum(input: string | Uint8Array | ArrayBuffer, options
   return guard(() => importDelimited(text, options, minPointsOf(options)));
 }
 
-/** Import every spectrum block of a JCAMP-DX file (multi-block and LINK files). */
-export function importJcampAll(input: string | Uint8Array | ArrayBuffer, options: ImportOptions = {}): JcampBlock[] {
+/** Import every spectrum block of a JCAMP-DX file (multi-block and LINK files), with the refused ones and why. */
+export function importJcampAll(input: string | Uint8Array | ArrayBuffer, options: ImportOptions = {}): JcampImport {
   const text = prepareText(input, options);
   return guard(() => importJcampBlocks(text, options, minPointsOf(options)));
 }

@@ -1,4 +1,4 @@
-import { gsd } from 'ml-gsd';
+import { gsd, type GSDPeak } from 'ml-gsd';
 import { noiseSigma } from './noise.js';
 import { halfHeightWidth, peakProminence } from './prominence.js';
 import type { Peak } from './types.js';
@@ -51,7 +51,7 @@ export function pickPeaks(xCm1: ArrayLike<number>, y: ArrayLike<number>, options
   const peaks: { x: number; height: number; widthCm1: number }[] = [];
   const used = new Set<number>();
   for (const candidate of found) {
-    const index = localMaximumNear(y, candidate.index);
+    const index = topOfCandidate(y, candidate);
     if (index <= 0 || index >= n - 1 || used.has(index)) continue;
     const { prominence, leftBase, rightBase } = peakProminence(y, index);
     const { x, height } = parabolicTop(xCm1, y, index);
@@ -72,10 +72,15 @@ function parabolicTop(x: ArrayLike<number>, y: ArrayLike<number>, i: number): { 
   return { x: x[i] + offset * (x[i + 1] - x[i]), height: y[i] - 0.25 * (y[i - 1] - y[i + 1]) * offset };
 }
 
-// gsd's candidate can sit a point or two off the top; climb to the local maximum. A shoulder
-// climbs onto its parent band and is then dropped as a duplicate.
-function localMaximumNear(y: ArrayLike<number>, index: number): number {
-  let i = Math.min(Math.max(index, 0), y.length - 1);
+// gsd's candidate can sit off the top, and on a noisy broad band the nearest local maximum is
+// a noise ripple: take the highest point between the candidate's inflection points, then
+// climb to the local maximum. A shoulder climbs onto its parent band and is then dropped as a
+// duplicate.
+function topOfCandidate(y: ArrayLike<number>, candidate: GSDPeak): number {
+  const from = Math.max(0, Math.min(candidate.index, candidate.inflectionPoints.from.index) - 2);
+  const to = Math.min(y.length - 1, Math.max(candidate.index, candidate.inflectionPoints.to.index) + 2);
+  let i = Math.min(Math.max(candidate.index, 0), y.length - 1);
+  for (let k = from; k <= to; k++) if (y[k] > y[i]) i = k;
   for (;;) {
     if (i + 1 < y.length && y[i + 1] > y[i]) i++;
     else if (i > 0 && y[i - 1] > y[i]) i--;

@@ -1,0 +1,121 @@
+import { describe, expect, it } from 'vitest';
+import { atrCorrection } from '../atr.js';
+import { estimateBaseline } from '../baseline.js';
+import { interferenceRegions, separateFlaggedPeaks } from '../interferences.js';
+import { pickPeaks } from '../peaks.js';
+import { detectSaturation } from '../saturation.js';
+import { smoothingNoiseGain, smoothSavitzkyGolay } from '../smooth.js';
+import { removeSpikes } from '../spikes.js';
+import { seededGaussian, syntheticSpectrum } from './synthetic.js';
+
+describe('removeSpikes', () => {
+  it('removes one-to-three-point cosmic rays and keeps a narrow real band', () => {
+    const s = syntheticSpectrum({ from: 200, to: 2000, step: 1, bands: [{ x: 1001, height: 500, fwhm: 6 }], noise: 3, technique: 'raman' });
+    const y = Float64Array.from(s.y);
+    y[300] += 2000;
+    y[700] += 1500;
+    y[701] += 1800;
+    y[1400] += 900;
+    y[1401] += 1200;
+    y[1402] += 800;
+    const { y: clean, spikesRemoved } = removeSpikes(y);
+    expect(spikesRemoved).toBe(3);
+    for (const i of [300, 700, 701, 1400, 1401, 1402]) expect(Math.abs(clean[i] - s.y[i])).toBeLessThan(20);
+    expect(clean[801]).toBe(y[801]);
+  });
+
+  it('finds nothing on a clean scan', () => {
+    const s = syntheticSpectrum({ from: 200, to: 2000, step: 1, bands: [{ x: 600, height: 800, fwhm: 5 }], noise: 3, technique: 'raman' });
+    expect(removeSpikes(s.y).spikesRemoved).toBe(0);
+  });
+});
+
+describe('detectSaturation', () => {
+  it('finds a clipped top and not a rounded one', () => {
+    const s = syntheticSpectrum({ from: 200, to: 2000, step: 1, bands: [{ x: 1001, height: 70000, fwhm: 12 }], noise: 5, technique: 'raman' });
+    expect(detectSaturation(s.y).saturated).toBe(false);
+    const clipped = s.y.map((v) => Math.min(v, 60000));
+    const result = detectSaturation(clipped);
+    expect(result.saturated).toBe(true);
+    expect(result.longestRun).toBeGreaterThanOrEqual(4);
+  });
+});
+
+describe('atrCorrection', () => {
+  it('multiplies absorbance by ν/ν_ref', () => {
+    const out = atrCorrection([500, 1000, 3000], [1, 1, 1], { referenceCm1: 1000 });
+    expect(Array.from(out)).toEqual([0.5, 1, 3]);
+    expect(() => atrCorrection([1], [1], { referenceCm1: 0 })).toThrow(RangeError);
+  });
+});
+
+describe('estimateBaseline', () => {
+  it('removes a fluorescence background ~80× taller than the bands (Raman default, arPLS)', () => {
+    const bands = [
+      { x: 620, height: 100, fwhm: 8 },
+      { x: 1001, height: 600, fwhm: 6 },
+      { x: 1602, height: 200, fwhm: 10 },
+    ];
+    const background = (x: number) => 50000 * Math.exp(-(((x - 1500) / 1400) ** 2)) + 4500 * (x / 3300) + 10000 * Math.exp(-(((x - 600) / 300) ** 2));
+    const s = syntheticSpectrum({ from: 200, to: 3300, step: 1, bands, noise: 5, technique: 'raman', background });
+    const { corrected } = estimateBaseline(s.xCm1, s.y, 1, { method: 'arpls', lambda: 1e4, maxIterations: 100, tolerance: 0.001 });
+    for (const b of bands) expect(Math.abs(corrected[b.x - 200] - b.height)).toBeLessThan(0.1 * b.height);
+    // Away from bands the corrected scan sits at zero within a few noise σ.
+    expect(Math.abs(corrected[2500 - 200])).toBeLessThan(40);
+  });
+
+  it('keeps both methods selectable and rejects unknown ones', () => {
+    const s = syntheticSpectrum({ from: 400, to: 4000, step: 2, bands: [{ x: 1700, height: 0.8, fwhm: 20 }], background: (x) => 0.2 + 0.00005 * x });
+    const viaPackage = estimateBaseline(s.xCm1, s.y, 2, { method: 'airpls', lambda: 1e5, maxIterations: 100, tolerance: 0.001 });
+    expect(viaPackage.corrected.length).toBe(s.y.length);
+    expect(() => estimateBaseline(s.xCm1, s.y, 2, { method: 'x' as never, lambda: 1, maxIterations: 1, tolerance: 1 })).toThrow(/method/);
+  });
+});
+
+describe('pickPeaks', () => {
+  it('finds the bands at their positions with their FWHM and no noise peaks', () => {
+    const bands = [
+      { x: 1100.3, height: 0.5, fwhm: 25 },
+      { x: 1700.6, height: 0.8, fwhm: 20 },
+      { x: 2950.2, height: 0.4, fwhm: 30 },
+    ];
+    const s = syntheticSpectrum({ from: 400, to: 4000, step: 1, bands, noise: 0.003, shape: 'gaussian', seed: 11 });
+    // As in processScan: smooth, and give the threshold the smoothed noise σ (raw σ × filter gain).
+    const smooth = { windowSize: 15, polynomial: 3 };
+    const peaks = pickPeaks(s.xCm1, smoothSavitzkyGolay(s.y, smooth), { noiseSigma: 0.003 * smoothingNoiseGain(smooth) });
+    expect(peaks.length).toBe(3);
+    peaks.forEach((p, i) => {
+      expect(Math.abs(p.x - bands[i].x)).toBeLessThan(0.5);
+      expect(Math.abs(p.widthCm1 - bands[i].fwhm)).toBeLessThan(1.5);
+      expect(Math.abs(p.height - bands[i].height)).toBeLessThan(0.02);
+    });
+    expect(peaks[1].relativeHeight).toBe(1);
+  });
+
+  it('returns nothing from pure noise', () => {
+    const g = seededGaussian(5);
+    const y = Array.from({ length: 3000 }, () => g());
+    const x = Array.from({ length: 3000 }, (_, i) => 400 + i);
+    expect(pickPeaks(x, y)).toEqual([]);
+  });
+});
+
+describe('interference flags', () => {
+  const peak = (x: number, widthCm1: number) => ({ x, height: 1, widthCm1, relativeHeight: 1 });
+
+  it('flags CO2, sharp water lines and the diamond region, and keeps broad condensed bands', () => {
+    const regions = interferenceRegions('ir', 'condensed', true);
+    const { peaks, flaggedPeaks } = separateFlaggedPeaks(
+      [peak(2349, 10), peak(667.5, 2), peak(1540, 2.5), peak(1715, 18), peak(3750, 3), peak(3400, 200), peak(2150, 12), peak(1000, 15)],
+      regions,
+    );
+    expect(peaks.map((p) => p.x)).toEqual([1715, 3400, 1000]);
+    expect(flaggedPeaks.map((p) => p.flag)).toEqual(['atmospheric-co2', 'atmospheric-co2', 'water-vapour', 'water-vapour', 'atr-diamond']);
+  });
+
+  it('flags no diamond without ATR, no water by width in a gas cell, and nothing for Raman', () => {
+    expect(interferenceRegions('ir', 'condensed', false).some((r) => r.flag === 'atr-diamond')).toBe(false);
+    expect(interferenceRegions('ir', 'gas', false).some((r) => r.flag === 'water-vapour')).toBe(false);
+    expect(interferenceRegions('raman', 'condensed', false)).toEqual([]);
+  });
+});
