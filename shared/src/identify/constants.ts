@@ -1,0 +1,56 @@
+/**
+ * Every tuning constant of the ranking, in one place. Values are engineering choices tuned on
+ * synthetic scans (common practice where noted), not published rules: the published identity
+ * tests give no numeric band tolerance (Ph. Eur. 2.2.24, ASTM E1252 — see the project check values §5).
+ */
+import type { BandIntensity } from '../library/types.js';
+
+/** Default match window for condensed-phase scans, ±cm⁻¹ (common practice for handheld instruments: ±5–10). */
+export const DEFAULT_TOLERANCE_CONDENSED_CM1 = 10;
+/** Default match window for gas-cell scans, ±cm⁻¹: band centres of gases are sharper and tabulated. */
+export const DEFAULT_TOLERANCE_GAS_CM1 = 6;
+/** A broad band (given FWHM) is matched within a quarter of its width when that exceeds the tolerance. */
+export const BROAD_BAND_WINDOW_FRACTION = 0.25;
+
+/** Weight of an expected band by its tabulated relative intensity. */
+export const INTENSITY_WEIGHT: Readonly<Record<BandIntensity, number>> = { vs: 1, s: 0.7, m: 0.4, w: 0.15, vw: 0.05 };
+/** Intensity assumed for an active fundamental whose intensity the library does not give. */
+export const DEFAULT_INTENSITY: BandIntensity = 'w';
+/** Expected bands at or above this weight are reported as missing bands when not seen. */
+export const MISSING_REPORT_WEIGHT = INTENSITY_WEIGHT.m;
+/** A match at the edge of its window counts this fraction of a centred one (quadratic fall-off between). */
+export const EDGE_MATCH_CREDIT = 0.5;
+
+/** Observed peaks at least this tall (relative to the tallest) can be evidence against. */
+export const AGAINST_MIN_RELATIVE_HEIGHT = 0.1;
+/** The score is multiplied by (1 − AGAINST_PENALTY × share of observed intensity that argues against). */
+export const AGAINST_PENALTY = 2;
+
+/** Candidates scored in detail after the fast pass over the whole library. */
+export const DETAIL_POOL_SIZE = 40;
+/** Candidates listed in a result (best first). */
+export const MAX_CANDIDATES = 10;
+/** Candidates below this band agreement are not listed. */
+export const MIN_CANDIDATE_SCORE = 0.1;
+/** A hazardous candidate at or above this band agreement is listed even beyond MAX_CANDIDATES. */
+export const PLAUSIBLE_HAZARD_SCORE = 0.25;
+/** At most this many hazardous candidates are added beyond MAX_CANDIDATES. */
+export const MAX_EXTRA_HAZARDOUS = 5;
+
+/** Candidates tried as mixture components. */
+export const MIXTURE_POOL_SIZE = 6;
+/** Only candidates at or above this band agreement enter the mixture search. */
+export const MIXTURE_MIN_CANDIDATE_SCORE = 0.15;
+/** A mixture is reported only when it explains at least this much more observed intensity than the best single compound. */
+export const MIXTURE_MIN_GAIN = 0.15;
+/** A third component is kept only when it adds at least this much explained intensity to the best pair. */
+export const MIXTURE_THIRD_COMPONENT_GAIN = 0.08;
+/** Every reported component must explain at least this share of the observed intensity. */
+export const MIXTURE_MIN_SHARE = 0.08;
+/** Grid step of the mixture band models, cm⁻¹. */
+export const MIXTURE_GRID_STEP_CM1 = 2;
+/** Gaussian σ of each band in the mixture models, as a fraction of the match tolerance. */
+export const MIXTURE_SIGMA_FRACTION = 0.6;
+
+/** Version of the ranking method, recorded with every result. */
+export const IDENTIFY_METHOD_VERSION = '1.0.0';

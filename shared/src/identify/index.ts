@@ -1,0 +1,11 @@
+/** Likely compounds for a scan: ranking by band agreement, mixtures, caution cards and escalation. */
+export * from './types.js';
+export * from './constants.js';
+export { identifyScan, type IdentifyOptions } from './identify-scan.js';
+export { compoundBands, type CompoundBands, type ExpectedBand } from './expected-bands.js';
+export { buildLibraryIndex, sumBandPositions, type LibraryIndex, type BandTable } from './library-index.js';
+export { observedPeaks, type ObservedPeaks } from './observed-peaks.js';
+export { rankLibrary, fastPass, type RankedCompound } from './rank.js';
+export { scoreCandidate, type AgainstPeak, type CandidateScore, type ExplainedPeak, type MissingBand, type ScoreParts } from './score-candidate.js';
+export { findMixture, type MixtureFit } from './mixture.js';
+export { MAX_TOLERANCE_CM1 } from './validate-input.js';

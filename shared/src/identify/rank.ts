@@ -1,0 +1,66 @@
+/**
+ * Ranking a scan against the whole library in two steps: a fast pass that, peak by peak, finds
+ * the bands in reach by binary search and accumulates an upper bound of each touched compound's
+ * band agreement (evidence against is left out, so the bound never under-estimates); then the
+ * detailed scoring of the best DETAIL_POOL_SIZE only.
+ */
+import { DETAIL_POOL_SIZE } from './constants.js';
+import type { BandTable, LibraryIndex } from './library-index.js';
+import type { ObservedPeaks } from './observed-peaks.js';
+import { scoreCandidate, type CandidateScore } from './score-candidate.js';
+import { bandAgreement, bandWindow, closeness, lowerBound } from './scoring.js';
+
+/** A scored compound, by its position in the index. */
+export interface RankedCompound extends CandidateScore {
+  readonly index: number;
+}
+
+/** Upper bounds of band agreement for every compound with at least one band in reach of a peak. */
+export function fastPass(index: LibraryIndex, obs: ObservedPeaks, toleranceCm1: number): { touched: number[]; upper: Float64Array } {
+  const n = index.compounds.length;
+  const tables: readonly BandTable[] = [index.sharp, index.broad];
+  const best = tables.map((t) => new Float64Array(t.positionCm1.length));
+  const explainedHeight = new Float64Array(n);
+  // lastPeak[c] === j marks peak j as already counted for compound c, across both tables.
+  const lastPeak = new Int32Array(n).fill(-1);
+  const touched: number[] = [];
+  for (let j = 0; j < obs.xCm1.length; j++) {
+    const x = obs.xCm1[j]!;
+    tables.forEach((t, k) => {
+      const reach = Math.max(toleranceCm1, t.maxHalfWidthCm1);
+      const bestK = best[k]!;
+      for (let i = lowerBound(t.positionCm1, x - reach); i < t.positionCm1.length && t.positionCm1[i]! <= x + reach; i++) {
+        const c = closeness(x - t.positionCm1[i]!, bandWindow(toleranceCm1, t.halfWidthCm1[i]!));
+        if (c === 0) continue;
+        if (c > bestK[i]!) bestK[i] = c;
+        const owner = t.owner[i]!;
+        if (lastPeak[owner] !== j) {
+          if (lastPeak[owner] === -1) touched.push(owner);
+          lastPeak[owner] = j;
+          explainedHeight[owner] += obs.relativeHeight[j]!;
+        }
+      }
+    });
+  }
+  const found = new Float64Array(n);
+  tables.forEach((t, k) => {
+    const bestK = best[k]!;
+    for (let i = 0; i < bestK.length; i++) if (bestK[i]! > 0) found[t.owner[i]!] += t.weight[i]! * bestK[i]!;
+  });
+  const upper = new Float64Array(n);
+  const totalHeight = obs.totalHeight > 0 ? obs.totalHeight : 1;
+  for (const c of touched) {
+    const w = index.totalWeight[c]!;
+    upper[c] = bandAgreement(w > 0 ? found[c]! / w : 0, explainedHeight[c]! / totalHeight, 0);
+  }
+  return { touched, upper };
+}
+
+/** Rank the library for the observed peaks, best first (ties: hazardous compounds first, then id). */
+export function rankLibrary(index: LibraryIndex, obs: ObservedPeaks, toleranceCm1: number): RankedCompound[] {
+  const { touched, upper } = fastPass(index, obs, toleranceCm1);
+  const pool = touched.sort((a, b) => upper[b]! - upper[a]!).slice(0, DETAIL_POOL_SIZE);
+  const ranked = pool.map((i): RankedCompound => ({ index: i, ...scoreCandidate(index.bands[i]!, obs, toleranceCm1, index.technique) }));
+  const hazardous = (i: number) => (index.compounds[i]!.hazards.classifications.length > 0 ? 0 : 1);
+  return ranked.sort((a, b) => b.score - a.score || hazardous(a.index) - hazardous(b.index) || index.compounds[a.index]!.id.localeCompare(index.compounds[b.index]!.id));
+}

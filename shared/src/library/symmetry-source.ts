@@ -1,0 +1,35 @@
+/**
+ * The link between the compound library and the symmetry engine: which species of a molecule's
+ * Γvib are IR and Raman active. The library never types activity by hand; it asks the engine,
+ * once per geometry, and caches the answer.
+ */
+
+/** One vibrational species as the engine reports it. */
+export interface SpeciesActivity {
+  readonly label: string;
+  readonly count: number;
+  readonly ir: boolean;
+  readonly raman: boolean;
+}
+
+/** The engine's answer for one structure. */
+export interface MoleculeSymmetry {
+  readonly pointGroup: string;
+  readonly species: readonly SpeciesActivity[];
+}
+
+/** A function from XYZ text to the molecule's point group and Γvib with activity. */
+export type SymmetryAnalyser = (xyz: string) => MoleculeSymmetry;
+
+/** Wrap an analyser so each distinct geometry is analysed once. */
+export function cachedAnalyser(analyse: SymmetryAnalyser): SymmetryAnalyser {
+  const cache = new Map<string, MoleculeSymmetry>();
+  return (xyz) => {
+    let hit = cache.get(xyz);
+    if (hit === undefined) {
+      hit = analyse(xyz);
+      cache.set(xyz, hit);
+    }
+    return hit;
+  };
+}
