@@ -32,6 +32,8 @@ export interface VibrationalMode extends IrrepActivity {
   /** Of those fundamentals, how many are bond stretches and how many deformations; null without bonds. */
   readonly stretches: number | null;
   readonly deformations: number | null;
+  /** The same split in words, e.g. `1 stretch + 1 deformation`; null without bonds. */
+  readonly composition: string | null;
   /** Gas-phase contour of the IR band; null when the species is IR-inactive. */
   readonly band: BandType | null;
 }
@@ -91,6 +93,7 @@ export function analyseVibrations(groupName: string, atoms: readonly Atom[], opt
       ...activity,
       stretches: nStretch,
       deformations: nStretch === null ? null : count - nStretch,
+      composition: nStretch === null ? null : describeSplit(nStretch, count - nStretch),
       band: activity.ir ? bandType(group, label, axes) : null,
     };
   });
@@ -108,6 +111,14 @@ export function analyseVibrations(groupName: string, atoms: readonly Atom[], opt
     internalCoordinates: internal,
     cautions: CAUTIONS,
   };
+}
+
+/** `2 stretches + 1 deformation`; a species with neither cannot occur (count ≥ 1). */
+function describeSplit(stretches: number, deformations: number): string {
+  const parts = [];
+  if (stretches) parts.push(`${stretches} ${stretches === 1 ? 'stretch' : 'stretches'}`);
+  if (deformations) parts.push(`${deformations} ${deformations === 1 ? 'deformation' : 'deformations'}`);
+  return parts.join(' + ');
 }
 
 /** Γstretch and its combinations, or null when neither bonds nor covalent radii are available. */

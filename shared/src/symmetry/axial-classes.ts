@@ -13,10 +13,10 @@ const SUP: Record<string, string> = { 0: '⁰', 1: '¹', 2: '²', 3: '³', 4: '�
 const sup = (k: number) => (k === 1 ? '' : String(k).replace(/\d/g, (d) => SUP[d]));
 
 /** Rotation by 2πk/n about z. */
-export const cz = (n: number, k = 1): Mat3 => rotation(Z, (2 * Math.PI * k) / n);
+const cz = (n: number, k = 1): Mat3 => rotation(Z, (2 * Math.PI * k) / n);
 
 /** The symbol of an operation about z (`C3²`, `S6⁵`, `σh`, `i`); `paired` uses the smaller power of an R, R⁻¹ class. */
-export function axialSymbol(op: Mat3, paired: boolean): string {
+function axialSymbol(op: Mat3, paired: boolean): string {
   if (!(op[0] * op[4] - op[1] * op[3] > 0)) throw new RangeError('axialSymbol needs an operation about z');
   // In-plane part is a rotation, so the operation is proper exactly when it keeps +z.
   const proper = op[8] > 0;

@@ -11,7 +11,7 @@ import { cleanNumber as clean } from './numeric.js';
 const cleanComplex = (z: Complex): Complex => ({ re: clean(z.re), im: clean(z.im) });
 
 /** Typographic primes for display: `A1''` → `A1″`, `E'` → `E′`. */
-export function displayLabel(label: string): string {
+function displayLabel(label: string): string {
   return label.replace(/''/g, '″').replace(/'/g, '′');
 }
 

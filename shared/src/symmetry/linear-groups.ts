@@ -15,7 +15,7 @@ import { INVERSION } from './mat3.js';
 
 const MODEL_N = 13;
 /** Largest |Λ| the model groups resolve. */
-export const MAX_LAMBDA = (MODEL_N - 1) / 2;
+const MAX_LAMBDA = (MODEL_N - 1) / 2;
 const LAMBDA_SYMBOLS = ['Σ', 'Π', 'Δ', 'Φ', 'Γ', 'H', 'I'];
 const REFERENCE = 'Herzberg, Infrared and Raman Spectra of Polyatomic Molecules (1945), linear-molecule labels (from memory)';
 

@@ -47,15 +47,6 @@ export function reduce(group: PointGroup, characters: readonly number[], failure
   return out;
 }
 
-/** Characters of a sum of irreps given by multiplicity. */
-export function charactersOf(group: PointGroup, decomposition: Decomposition): number[] {
-  const chars = group.classes.map(() => 0);
-  for (const [label, n] of Object.entries(decomposition)) {
-    irrepByLabel(group, label).characters.forEach((x, i) => (chars[i] += n * x));
-  }
-  return chars;
-}
-
 /** Characters of the direct product of representations (class by class). */
 export function directProduct(...factors: readonly (readonly number[])[]): number[] {
   if (factors.length === 0) throw new RangeError('direct product of nothing');
@@ -97,9 +88,4 @@ export function symmetricPower(group: PointGroup, characters: readonly number[],
     );
   }
   return h[v].map(cleanNumber);
-}
-
-/** A representation with its reduction. */
-export function representation(group: PointGroup, characters: readonly number[]): Representation {
-  return { characters: [...characters], decomposition: reduce(group, characters) };
 }

@@ -27,6 +27,7 @@ describe('bond stretches as internal coordinates', () => {
     const r = analyse('CH4', [[0, 1], [0, 2], [0, 3], [0, 4]]);
     expect(r.internalCoordinates!.gammaStretch.decomposition).toEqual({ A1: 1, T2: 1 });
     expect(split(r)).toEqual({ A1: [1, 0], E: [0, 1], T2: [1, 1] });
+    expect(r.vibrations.modes.map((m) => m.composition)).toEqual(['1 stretch', '1 deformation', '1 stretch + 1 deformation']);
   });
 
   it('SF6: Γstretch = A1g + Eg + T1u', () => {
@@ -45,6 +46,7 @@ describe('bond stretches as internal coordinates', () => {
     const r = analyse('benzene', bonds);
     expect(r.internalCoordinates!.gammaStretch.decomposition).toEqual({ A1g: 2, E2g: 2, B1u: 1, B2u: 1, E1u: 2 });
     expect(r.internalCoordinates!.bondSource).toBe('listed');
+    expect(r.vibrations.modes.find((m) => m.label === 'E2g')!.composition).toBe('2 stretches + 2 deformations');
   });
 
   it('C60: 90 bonds, every stretch within the vibrations of its species', () => {
