@@ -1,0 +1,28 @@
+import { Module } from '@nestjs/common';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { AuthModule } from './auth/auth.module';
+import type { AppConfig } from './config/app-config';
+import { APP_CONFIG, AppConfigModule } from './config/config.module';
+import { buildDataSourceOptions } from './database/data-source-options';
+import { HealthModule } from './health/health.module';
+import { UsersModule } from './users/users.module';
+
+/** The whole API. */
+@Module({
+  imports: [
+    AppConfigModule,
+    TypeOrmModule.forRootAsync({
+      inject: [APP_CONFIG],
+      useFactory: (config: AppConfig) => ({
+        ...buildDataSourceOptions(config.database),
+        // Fail fast at start when the database is unreachable, rather than retrying for half a minute.
+        retryAttempts: 3,
+        retryDelay: 1000,
+      }),
+    }),
+    UsersModule,
+    AuthModule,
+    HealthModule,
+  ],
+})
+export class AppModule {}
