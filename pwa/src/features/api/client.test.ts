@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { AuthResponse } from '../session/types';
 import { ApiError } from './apiError';
+import { logout } from '../session/authApi';
 import { createApiClient, type TokenSource } from './client';
 
 /** Tokens kept in memory, standing in for the session store. */
@@ -35,6 +36,7 @@ function fakeApi(options: { refreshStatus?: number } = {}) {
   let validAccess = 'access-1';
   let validRefresh = 'refresh-1';
   const calls: { path: string; authorization: string | null; body: unknown }[] = [];
+  const revoked: string[] = [];
   const fetchFn = async (input: RequestInfo | URL, init: RequestInit = {}) => {
     const path = String(input);
     const authorization = new Headers(init.headers).get('Authorization');
@@ -54,12 +56,19 @@ function fakeApi(options: { refreshStatus?: number } = {}) {
       return json(200, user);
     }
     if (path === '/api/auth/login') return json(401, { statusCode: 401, error: 'Unauthorized', message: 'Email or password is wrong', requestId: 'req-2' });
-    if (path === '/api/auth/logout') return new Response(null, { status: 204 });
+    if (path === '/api/auth/logout') {
+      if (authorization !== `Bearer ${validAccess}` || body?.refreshToken !== validRefresh) {
+        return json(401, { statusCode: 401, error: 'Unauthorized', message: 'Not signed in', requestId: 'req-3' });
+      }
+      revoked.push(body.refreshToken);
+      return new Response(null, { status: 204 });
+    }
     return json(404, { statusCode: 404, error: 'Not Found', message: `Cannot GET ${path}`, requestId: 'req-404' });
   };
   return {
     fetchFn,
     calls,
+    revoked,
     expireAccessToken() {
       validAccess = 'rotated-away';
     },
@@ -151,8 +160,23 @@ describe('API client', () => {
 
   it('gives undefined for 204 No Content', async () => {
     const api = fakeApi();
-    const client = createApiClient({ tokens: memoryTokens(), fetchFn: api.fetchFn });
-    await expect(client.request('/api/auth/logout', { method: 'POST', body: { refreshToken: 'r' }, auth: false })).resolves.toBeUndefined();
+    const client = createApiClient({ tokens: memoryTokens({ accessToken: 'access-1', refreshToken: 'refresh-1' }), fetchFn: api.fetchFn });
+    await expect(logout(client)).resolves.toBeUndefined();
+    expect(api.revoked).toEqual(['refresh-1']);
+  });
+
+  it('signs out with the rotated refresh token when the access token had to be refreshed first', async () => {
+    const api = fakeApi();
+    const tokens = memoryTokens({ accessToken: 'access-1', refreshToken: 'refresh-1' });
+    const client = createApiClient({ tokens, fetchFn: api.fetchFn });
+    api.expireAccessToken();
+    await logout(client);
+    expect(api.calls.map((c) => [c.path, c.body])).toEqual([
+      ['/api/auth/logout', { refreshToken: 'refresh-1' }],
+      ['/api/auth/refresh', { refreshToken: 'refresh-1' }],
+      ['/api/auth/logout', { refreshToken: 'refresh-2' }],
+    ]);
+    expect(api.revoked).toEqual(['refresh-2']);
   });
 });
 

@@ -1,17 +1,26 @@
 import type { AuthResponse } from '../session/types';
 import { ApiError } from './apiError';
 
+/** The pair of tokens of a session. */
+export interface SessionTokens {
+  accessToken: string;
+  refreshToken: string;
+}
+
 /** Where the client reads and keeps the session's tokens (the session store in the app). */
 export interface TokenSource {
-  current(): { accessToken: string; refreshToken: string } | undefined;
+  current(): SessionTokens | undefined;
   save(auth: AuthResponse): Promise<unknown>;
   clear(): Promise<void>;
 }
 
 export interface RequestOptions {
   method?: 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
-  /** Sent as JSON. */
-  body?: unknown;
+  /**
+   * Sent as JSON. A function is called with the current tokens on every attempt, so a body that
+   * names the refresh token (sign-out) carries the rotated one when the request is repeated.
+   */
+  body?: object | ((tokens: SessionTokens | undefined) => object);
   /** Adds the bearer token and refreshes it on a 401 (default true). */
   auth?: boolean;
   signal?: AbortSignal;
@@ -35,14 +44,15 @@ export function createApiClient({ tokens, fetchFn = (...args) => fetch(...args) 
   let refreshing: Promise<string | undefined> | undefined;
 
   async function send(path: string, options: RequestOptions, accessToken: string | undefined): Promise<Response> {
+    const body = typeof options.body === 'function' ? options.body(tokens.current()) : options.body;
     const headers: Record<string, string> = { Accept: 'application/json' };
-    if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+    if (body !== undefined) headers['Content-Type'] = 'application/json';
     if (accessToken) headers.Authorization = `Bearer ${accessToken}`;
     try {
       return await fetchFn(path, {
         method: options.method ?? 'GET',
         headers,
-        body: options.body === undefined ? undefined : JSON.stringify(options.body),
+        body: body === undefined ? undefined : JSON.stringify(body),
         signal: options.signal,
       });
     } catch (cause) {

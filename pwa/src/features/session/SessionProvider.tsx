@@ -57,9 +57,8 @@ export function SessionProvider({ store, offlineSessionHours, children }: { stor
   );
 
   const signOut = useCallback(async () => {
-    const refreshToken = store.current()?.refreshToken;
     try {
-      if (refreshToken && navigator.onLine) await logout(client, refreshToken);
+      if (store.current() && navigator.onLine) await logout(client);
     } catch (error) {
       // Unreachable server: the token still expires on its own; signing out here must not be blocked.
       if (!(error instanceof ApiError)) throw error;

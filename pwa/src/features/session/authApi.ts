@@ -13,9 +13,13 @@ export function login(client: ApiClient, credentials: Credentials): Promise<Auth
   return client.request<AuthResponse>('/api/auth/login', { method: 'POST', body: credentials, auth: false });
 }
 
-/** Revokes the refresh token on the server. */
-export function logout(client: ApiClient, refreshToken: string): Promise<void> {
-  return client.request<void>('/api/auth/logout', { method: 'POST', body: { refreshToken }, auth: false });
+/** Revokes the session's refresh token on the server (the call itself needs the access token). */
+export function logout(client: ApiClient): Promise<void> {
+  return client.request<void>('/api/auth/logout', {
+    method: 'POST',
+    // Read at send time: if the access token is refreshed first, the rotated refresh token is the one to revoke.
+    body: (tokens) => ({ refreshToken: tokens?.refreshToken }),
+  });
 }
 
 /** Asks the server who the token belongs to; succeeding confirms the session. */

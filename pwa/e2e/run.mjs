@@ -1,0 +1,220 @@
+// Browser end-to-end tests of the PWA shell against a running Siteband server.
+// Usage: BASE_URL=http://127.0.0.1:3999 SITEBAND_DEMO_PASSWORD=... node pwa/e2e/run.mjs
+import assert from 'node:assert/strict';
+import { after, before, describe, it } from 'node:test';
+import { blockingViolations } from './axe.mjs';
+import { openBrowser, screenshot } from './browser.mjs';
+import { openTab, pageTitle, signIn, signInTo, signOut, storedRefreshToken, tabLabels, waitForServiceWorker } from './shell.mjs';
+
+const BASE_URL = (process.env.BASE_URL || '').replace(/\/$/, '');
+const PASSWORD = process.env.SITEBAND_DEMO_PASSWORD || 'siteband-demo-2026';
+if (!BASE_URL) {
+  console.error('BASE_URL is not set: start the server and pass its address, e.g. BASE_URL=http://127.0.0.1:3999');
+  process.exit(2);
+}
+
+const ALL_TABS = ['Cases', 'Capture', 'Review queue', 'Compound library', 'Escalations', 'Users', 'Account'];
+
+// The roles' tabs as the product brief defines them; every role also has Account.
+const ROLES = [
+  { role: 'inspector', email: 'inspector@demo.test', roleLabel: 'Inspector', tabs: ['Cases', 'Capture', 'Account'] },
+  { role: 'supervisor', email: 'supervisor@demo.test', roleLabel: 'Supervisor', tabs: ['Review queue', 'Compound library', 'Account'] },
+  { role: 'safety_officer', email: 'safety@demo.test', roleLabel: 'Safety officer', tabs: ['Escalations', 'Account'] },
+  { role: 'admin', email: 'admin@demo.test', roleLabel: 'Administrator', tabs: ['Users', 'Account'] },
+];
+
+/** Asks the API directly whether a refresh token is still accepted. */
+async function refreshStatus(refreshToken) {
+  const response = await fetch(`${BASE_URL}/api/auth/refresh`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ refreshToken }),
+  });
+  return response.status;
+}
+
+async function assertAccessible(page, where) {
+  const violations = await blockingViolations(page);
+  assert.deepEqual(violations, [], `axe found serious or critical problems on ${where}`);
+}
+
+describe('Siteband PWA shell', { concurrency: false }, () => {
+  let browser;
+  before(async () => {
+    browser = await openBrowser();
+  });
+  after(async () => {
+    await browser?.close();
+  });
+
+  it('shows the sign-in page without accessibility problems and refuses a wrong password', async () => {
+    const { page } = browser;
+    await page.goto(`${BASE_URL}/`);
+    await page.waitForURL(/\/signin$/);
+    await pageTitle(page, 'Sign in').waitFor();
+    await assertAccessible(page, 'the sign-in page');
+    await screenshot(page, 'signin-1024x768');
+
+    await signIn(page, BASE_URL, 'inspector@demo.test', `${PASSWORD}-not-this-one`);
+    const alert = page.getByRole('alert');
+    await alert.waitFor();
+    assert.equal((await alert.textContent()).trim(), 'Email or password is wrong.');
+    assert.match(page.url(), /\/signin$/);
+    assert.equal(await page.locator('ion-tab-bar').count(), 0, 'no tab bar after a refused sign-in');
+    await assertAccessible(page, 'the sign-in page with its error');
+    await screenshot(page, 'signin-wrong-password');
+  });
+
+  for (const { role, email, roleLabel, tabs } of ROLES) {
+    it(`signs in as ${role} and offers that role's tabs only`, async () => {
+      const { page } = browser;
+      await signInTo(page, BASE_URL, email, PASSWORD, tabs[0]);
+      assert.deepEqual(await tabLabels(page), tabs);
+      for (const other of ALL_TABS.filter((t) => !tabs.includes(t))) {
+        assert.equal(await page.locator('ion-tab-bar ion-tab-button', { hasText: other }).count(), 0, `${role} must not see ${other}`);
+      }
+
+      for (const label of tabs) {
+        await openTab(page, label);
+        await assertAccessible(page, `${role} → ${label}`);
+        await screenshot(page, `${role}-${label.toLowerCase().replace(/\s+/g, '-')}`);
+      }
+
+      // Account shows who is signed in, with the role named in words.
+      assert.equal((await page.getByTestId('account-role').last().textContent()).trim(), roleLabel);
+      assert.ok((await page.getByTestId('account-name').last().textContent()).trim().length > 0);
+
+      const refreshToken = await storedRefreshToken(page);
+      assert.ok(refreshToken, 'the session is kept in IndexedDB');
+      await page.getByRole('button', { name: 'Sign out' }).click();
+      await page.waitForURL(/\/signin$/);
+      assert.equal(await refreshStatus(refreshToken), 401, 'sign-out revoked the refresh token on the server');
+      assert.equal(await storedRefreshToken(page), undefined, 'sign-out removed the session from the tablet');
+      await page.reload();
+      await pageTitle(page, 'Sign in').waitFor();
+      assert.equal(await page.locator('ion-tab-bar').count(), 0, 'signed out stays signed out after a reload');
+    });
+  }
+
+  it("keeps a role's own pages behind its tabs: an inspector sent to /tabs/users lands on Cases", async () => {
+    const { page } = browser;
+    await signInTo(page, BASE_URL, 'inspector@demo.test', PASSWORD, 'Cases');
+    await page.goto(`${BASE_URL}/tabs/users`);
+    await pageTitle(page, 'Cases').waitFor();
+    assert.match(page.url(), /\/tabs\/cases$/);
+    assert.equal(await pageTitle(page, 'Users').count(), 0);
+    await signOut(page);
+  });
+
+  it('opens the structure check from the compound library', async () => {
+    const { page } = browser;
+    await signInTo(page, BASE_URL, 'supervisor@demo.test', PASSWORD, 'Review queue');
+    await openTab(page, 'Compound library');
+    await page.getByText('Open the structure check').click();
+    await pageTitle(page, 'Structure check').waitFor();
+    assert.match(page.url(), /\/tabs\/library\/structure$/);
+    await assertAccessible(page, 'the structure check page');
+    await screenshot(page, 'supervisor-structure-check');
+    await signOut(page);
+  });
+});
+
+describe('administering users', { concurrency: false }, () => {
+  let browser;
+  before(async () => {
+    browser = await openBrowser();
+  });
+  after(async () => {
+    await browser?.close();
+  });
+
+  it('creates a user, changes the role and deactivates them, and the change survives a reload', async () => {
+    const { page } = browser;
+    const email = `e2e-${Date.now()}@demo.test`;
+    const name = `Field Trial ${Date.now() % 100000}`;
+    await signInTo(page, BASE_URL, 'admin@demo.test', PASSWORD, 'Users');
+    await page.getByRole('table').waitFor();
+
+    await page.getByLabel('Full name').fill(name);
+    await page.getByLabel('Email', { exact: true }).fill(email);
+    await page.getByLabel('Role', { exact: true }).selectOption('inspector');
+    await page.getByLabel('First password').fill(`${PASSWORD}-e2e`);
+    await page.getByRole('button', { name: 'Create user' }).click();
+    await page.getByRole('status').filter({ hasText: `${name} can now sign in as Inspector.` }).waitFor();
+
+    const row = page.getByTestId(`user-row-${email}`);
+    await row.waitFor();
+    await row.getByLabel(`Role of ${name}`).selectOption('safety_officer');
+    await row.getByRole('button', { name: `Deactivate ${name}` }).click();
+    await row.getByText('Deactivated').waitFor();
+    await assertAccessible(page, 'the users page');
+    await screenshot(page, 'admin-users-after-changes');
+
+    await page.reload();
+    const reloaded = page.getByTestId(`user-row-${email}`);
+    await reloaded.waitFor();
+    assert.equal(await reloaded.getByLabel(`Role of ${name}`).inputValue(), 'safety_officer');
+    assert.equal((await reloaded.locator('.sb-pill').textContent()).trim(), 'Deactivated');
+
+    // The deactivated person can no longer sign in.
+    await signOut(page);
+    await signIn(page, BASE_URL, email, `${PASSWORD}-e2e`);
+    await page.getByRole('alert').waitFor();
+    assert.match(page.url(), /\/signin$/);
+  });
+});
+
+describe('offline', { concurrency: false }, () => {
+  let browser;
+  before(async () => {
+    browser = await openBrowser({ width: 800, height: 1280 });
+  });
+  after(async () => {
+    await browser?.close();
+  });
+
+  it('reloads the shell for the stored user without a network, and says it is offline', async () => {
+    const { page, context } = browser;
+    await signInTo(page, BASE_URL, 'inspector@demo.test', PASSWORD, 'Cases');
+    await openTab(page, 'Account');
+    const name = (await page.getByTestId('account-name').last().textContent()).trim();
+    await waitForServiceWorker(page);
+
+    const apiCallsWhileOffline = [];
+    page.on('request', (request) => {
+      if (new URL(request.url()).pathname.startsWith('/api/')) apiCallsWhileOffline.push(request.url());
+    });
+    await context.setOffline(true);
+    await page.reload();
+    await pageTitle(page, 'Account').waitFor();
+    const status = page.getByTestId('connection-status').last();
+    assert.equal((await status.textContent()).trim(), 'Offline');
+    assert.equal((await page.getByTestId('account-name').last().textContent()).trim(), name);
+    assert.deepEqual(await tabLabels(page), ['Cases', 'Capture', 'Account']);
+    await openTab(page, 'Capture');
+    await assertAccessible(page, 'the capture page offline');
+    await screenshot(page, 'offline-capture-800x1280');
+
+    // A deep link typed while offline is served by the service worker's navigation fallback too.
+    await page.goto(`${BASE_URL}/tabs/cases`);
+    await pageTitle(page, 'Cases').waitFor();
+    assert.deepEqual(apiCallsWhileOffline, [], 'offline, the shell must not call the API');
+
+    await context.setOffline(false);
+    await page.getByTestId('connection-status').last().filter({ hasText: 'Online' }).waitFor();
+    await screenshot(page, 'inspector-cases-800x1280');
+  });
+
+  it('shows the shell in the dark palette when the tablet asks for it', async () => {
+    const { page } = browser;
+    await page.emulateMedia({ colorScheme: 'dark' });
+    await page.reload();
+    await pageTitle(page, 'Cases').waitFor();
+    assert.equal(await page.evaluate(() => document.documentElement.classList.contains('ion-palette-dark')), true);
+    await assertAccessible(page, 'the cases page, dark palette');
+    await screenshot(page, 'dark-cases-800x1280');
+    await openTab(page, 'Account');
+    await assertAccessible(page, 'the account page, dark palette');
+    await screenshot(page, 'dark-account-800x1280');
+  });
+});
