@@ -7,7 +7,7 @@
 import { describe, expect, it } from 'vitest';
 import { analyseVibrations } from './analyse.js';
 import { MOLECULES, at } from './__tests__/molecules.js';
-import { reduce } from './representation.js';
+import { reduceCharacters } from './representation.js';
 import { pointGroup } from './catalogue.js';
 
 const EXPECTED: Record<string, { gamma: Record<string, number>; source: string }> = {
@@ -148,7 +148,7 @@ describe('Γ3N bookkeeping and bad input', () => {
   });
 
   it('refuses characters that do not reduce to whole multiplicities', () => {
-    expect(() => reduce(pointGroup('C2v'), [3, 1, 0, 0], 'structure is not in the standard orientation for group C2v')).toThrow(
+    expect(() => reduceCharacters(pointGroup('C2v'), [3, 1, 0, 0], 'structure is not in the standard orientation for group C2v')).toThrow(
       'structure is not in the standard orientation for group C2v',
     );
   });

@@ -2,7 +2,7 @@
 import type { Atom } from './types.js';
 import type { PointGroup } from './group-types.js';
 import { pointGroup } from './catalogue.js';
-import { atomPermutations, DEFAULT_TOLERANCE, validateAtoms } from './atom-mapping.js';
+import { atomPermutations, DEFAULT_SYMMETRY_TOLERANCE, validateAtoms } from './atom-mapping.js';
 import { cartesianGammas, type ClassContribution } from './gamma.js';
 import { activityCounts, irrepActivity, type ActivityCounts, type IrrepActivity } from './activity.js';
 import { bandType, topFromGroup, type BandType, type TopKind } from './band-type.js';
@@ -71,7 +71,7 @@ const CAUTIONS = [
  * that every operation maps the structure onto itself, reduces Γ3N and reports Γvib with activity.
  */
 export function analyseVibrations(groupName: string, atoms: readonly Atom[], options: AnalyseOptions = {}): VibrationalAnalysis {
-  const tolerance = options.tolerance ?? DEFAULT_TOLERANCE;
+  const tolerance = options.tolerance ?? DEFAULT_SYMMETRY_TOLERANCE;
   if (!(tolerance > 0)) throw new RangeError(`tolerance must be a positive distance in Å, got ${tolerance}`);
   validateAtoms(atoms);
   const group = pointGroup(groupName);

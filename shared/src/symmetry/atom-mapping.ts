@@ -4,7 +4,7 @@ import type { PointGroup } from './group-types.js';
 import { apply } from './mat3.js';
 
 /** Default distance (Å) within which a moved atom must land on an equivalent atom. */
-export const DEFAULT_TOLERANCE = 0.05;
+export const DEFAULT_SYMMETRY_TOLERANCE = 0.05;
 
 /** Throws TypeError/RangeError describing the first malformed atom. */
 export function validateAtoms(atoms: readonly Atom[]): void {
@@ -50,7 +50,7 @@ export function atomPermutation(op: Mat3, atoms: readonly Atom[], tolerance: num
 }
 
 /** Permutation of the atoms under every operation of the group (same order as group.operations). */
-export function atomPermutations(group: PointGroup, atoms: readonly Atom[], tolerance = DEFAULT_TOLERANCE): number[][] {
+export function atomPermutations(group: PointGroup, atoms: readonly Atom[], tolerance = DEFAULT_SYMMETRY_TOLERANCE): number[][] {
   return group.operations.map((o) => atomPermutation(o.matrix, atoms, tolerance, group.classes[o.classIndex].label, group.name));
 }
 

@@ -4,7 +4,7 @@ import type { Atom } from './types.js';
 export type Bond = readonly [number, number];
 
 /** Bonded when the distance is at most this factor times the sum of covalent radii (common practice). */
-export const BOND_FACTOR = 1.2;
+export const COVALENT_BOND_FACTOR = 1.2;
 
 /** Checks listed bonds (0-based atom indices); throws RangeError on the first bad one. */
 export function validateBonds(bonds: readonly Bond[], atomCount: number): void {
@@ -19,8 +19,8 @@ export function validateBonds(bonds: readonly Bond[], atomCount: number): void {
   });
 }
 
-/** Pairs closer than BOND_FACTOR × (r_i + r_j); `radiusOf` returns a covalent radius in Å. */
-export function deriveBonds(atoms: readonly Atom[], radiusOf: (element: string) => number | undefined, factor = BOND_FACTOR): Bond[] {
+/** Pairs closer than COVALENT_BOND_FACTOR × (r_i + r_j); `radiusOf` returns a covalent radius in Å. */
+export function deriveBonds(atoms: readonly Atom[], radiusOf: (element: string) => number | undefined, factor = COVALENT_BOND_FACTOR): Bond[] {
   const radii = atoms.map((a, i) => {
     const r = radiusOf(a.element);
     if (r === undefined || !(r > 0)) throw new RangeError(`atom ${i + 1}: no covalent radius known for element ${a.element}`);

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { pointGroup, pointGroupNames } from './catalogue.js';
 import { classIndexOf, operationIndex } from './group-lookup.js';
 import { det, mul, trace, transpose } from './mat3.js';
-import { powerClass, reduce } from './representation.js';
+import { powerClass, reduceCharacters } from './representation.js';
 import type { Complex, PointGroup } from './group-types.js';
 
 /** The irreps over ℂ: each combined E split back into its two complex characters. */
@@ -73,12 +73,12 @@ describe('point-group catalogue', () => {
     const expected = (count: (ir: PointGroup['irreps'][number]) => number) =>
       Object.fromEntries(g.irreps.filter((ir) => count(ir) > 0).map((ir) => [ir.label, count(ir) / ir.dimension]));
     // Vector representation: χ = tr R.
-    expect(reduce(g, reps.map(trace))).toEqual(expected((ir) => ir.translations.length));
+    expect(reduceCharacters(g, reps.map(trace))).toEqual(expected((ir) => ir.translations.length));
     // Rotations (axial vector): χ = det R · tr R.
-    expect(reduce(g, reps.map((r) => det(r) * trace(r)))).toEqual(expected((ir) => ir.rotations.length));
+    expect(reduceCharacters(g, reps.map((r) => det(r) * trace(r)))).toEqual(expected((ir) => ir.rotations.length));
     // Quadratic functions: symmetric square of the vector representation, ½[χ(R)² + χ(R²)].
     const sym2 = reps.map((r, k) => (trace(r) ** 2 + trace(g.classes[powerClass(g, k, 2)].representative)) / 2);
-    expect(reduce(g, sym2)).toEqual(expected((ir) => ir.quadratics.length));
+    expect(reduceCharacters(g, sym2)).toEqual(expected((ir) => ir.quadratics.length));
     expect(g.irreps.flatMap((ir) => ir.translations).sort()).toEqual(['x', 'y', 'z']);
     expect(g.irreps.reduce((s, ir) => s + ir.quadratics.length, 0)).toBe(6);
   });

@@ -3,7 +3,7 @@ import type { Atom, Mat3, Vec3 } from './types.js';
 import type { PointGroup } from './group-types.js';
 import { det, trace, apply, normalize } from './mat3.js';
 import { isUnmoved } from './atom-mapping.js';
-import { reduce, type Representation } from './representation.js';
+import { reduceCharacters, type Representation } from './representation.js';
 import { cleanNumber as clean } from './numeric.js';
 
 /** What one class contributes to Γ3N. */
@@ -64,10 +64,10 @@ export function cartesianGammas(group: PointGroup, atoms: readonly Atom[], toler
   const chiRot = group.classes.map((c) => clean(rotationCharacter(c.representative, atoms.length, axis)));
   const chiVib = chi3N.map((x, i) => x - chiTrans[i] - chiRot[i]);
   return {
-    gamma3N: { characters: chi3N, decomposition: reduce(group, chi3N, notOriented) },
-    gammaTrans: { characters: chiTrans, decomposition: reduce(group, chiTrans) },
-    gammaRot: { characters: chiRot, decomposition: reduce(group, chiRot) },
-    gammaVib: { characters: chiVib, decomposition: reduce(group, chiVib, notOriented) },
+    gamma3N: { characters: chi3N, decomposition: reduceCharacters(group, chi3N, notOriented) },
+    gammaTrans: { characters: chiTrans, decomposition: reduceCharacters(group, chiTrans) },
+    gammaRot: { characters: chiRot, decomposition: reduceCharacters(group, chiRot) },
+    gammaVib: { characters: chiVib, decomposition: reduceCharacters(group, chiVib, notOriented) },
     contributions,
     linear: axis !== undefined,
   };

@@ -6,7 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { pointGroup } from './catalogue.js';
 import { levelSymmetry, transitionActivity } from './levels.js';
-import { directProduct, irrepByLabel, symmetricPower, reduce } from './representation.js';
+import { directProduct, irrepByLabel, symmetricPower, reduceCharacters } from './representation.js';
 import { mul, trace } from './mat3.js';
 
 const level = (group: string, ...ex: [string, number][]) =>
@@ -16,7 +16,7 @@ describe('overtone levels (symmetric powers, not plain direct powers)', () => {
   it('2ν(E) in C3v is A1 + E, not the direct square A1 + A2 + E', () => {
     expect(level('C3v', ['E', 2])).toEqual({ A1: 1, E: 1 });
     const e = irrepByLabel(pointGroup('C3v'), 'E').characters;
-    expect(reduce(pointGroup('C3v'), directProduct(e, e))).toEqual({ A1: 1, A2: 1, E: 1 });
+    expect(reduceCharacters(pointGroup('C3v'), directProduct(e, e))).toEqual({ A1: 1, A2: 1, E: 1 });
   });
 
   it('3ν(E) in C3v is A1 + A2 + E', () => expect(level('C3v', ['E', 3])).toEqual({ A1: 1, A2: 1, E: 1 }));

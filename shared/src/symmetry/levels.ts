@@ -7,7 +7,7 @@ import type { CartesianComponent, PointGroup } from './group-types.js';
 import {
   directProduct,
   irrepByLabel,
-  reduce,
+  reduceCharacters,
   symmetricPower,
   type Representation,
 } from './representation.js';
@@ -35,7 +35,7 @@ export function levelSymmetry(group: PointGroup, excitations: readonly Excitatio
   guardLambda(group, excitations);
   const factors = excitations.map((e) => symmetricPower(group, irrepByLabel(group, e.irrep).characters, e.quanta));
   const characters = factors.length ? directProduct(...factors) : group.classes.map(() => 1);
-  return { characters, decomposition: reduce(group, characters) };
+  return { characters, decomposition: reduceCharacters(group, characters) };
 }
 
 /** IR and Raman selection rules for initial → final (a fundamental, overtone, combination or hot band). */
@@ -49,7 +49,7 @@ export function transitionActivity(
   const gi = levelSymmetry(group, initial);
   const gf = levelSymmetry(group, final);
   const characters = directProduct(gi.characters, gf.characters);
-  const product = { characters, decomposition: reduce(group, characters) };
+  const product = { characters, decomposition: reduceCharacters(group, characters) };
   const present = Object.keys(product.decomposition).map((l) => irrepByLabel(group, l));
   const irComponents = (['x', 'y', 'z'] as const).filter((c) => present.some((ir) => ir.translations.includes(c)));
   const ramanComponents = [...new Set(present.flatMap((ir) => ir.quadratics))];

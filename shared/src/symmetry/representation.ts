@@ -15,7 +15,7 @@ export interface Representation {
 }
 
 /** (1/h) Σ_classes g_c a(c) b(c): the character inner product (characters here are real). */
-export function innerProduct(group: PointGroup, a: readonly number[], b: readonly number[]): number {
+export function characterInnerProduct(group: PointGroup, a: readonly number[], b: readonly number[]): number {
   return group.classes.reduce((s, c, i) => s + c.size * a[i] * b[i], 0) / group.order;
 }
 
@@ -31,13 +31,13 @@ export function irrepByLabel(group: PointGroup, label: string): Irrep {
  * combined separably degenerate E, 1 otherwise). Throws RangeError(`failure`) when a multiplicity is not
  * a non-negative integer, which means the characters are not those of a representation of the group.
  */
-export function reduce(group: PointGroup, characters: readonly number[], failure?: string): Decomposition {
+export function reduceCharacters(group: PointGroup, characters: readonly number[], failure?: string): Decomposition {
   if (characters.length !== group.classes.length) {
     throw new RangeError(`${group.name} has ${group.classes.length} classes, got ${characters.length} characters`);
   }
   const out: Decomposition = {};
   for (const ir of group.irreps) {
-    const n = innerProduct(group, characters, ir.characters) / innerProduct(group, ir.characters, ir.characters);
+    const n = characterInnerProduct(group, characters, ir.characters) / characterInnerProduct(group, ir.characters, ir.characters);
     const r = Math.round(n);
     if (Math.abs(n - r) > 1e-6 || r < 0) {
       throw new RangeError(failure ?? `characters do not reduce to whole multiplicities in ${group.name} (${ir.label}: ${n.toFixed(3)})`);

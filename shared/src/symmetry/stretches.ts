@@ -4,7 +4,7 @@
  */
 import type { PointGroup } from './group-types.js';
 import type { Bond } from './bonds.js';
-import { reduce, type Representation } from './representation.js';
+import { reduceCharacters, type Representation } from './representation.js';
 
 /** Symmetry-adapted combinations of bond stretches of one irrep: coefficients per bond, each normalised. */
 export interface StretchCombinations {
@@ -35,7 +35,7 @@ export function stretchRepresentation(group: PointGroup, bondPerms: readonly (re
     const o = group.operations.findIndex((op) => op.classIndex === c);
     return bondPerms[o].filter((image, k) => image === k).length;
   });
-  return { characters, decomposition: reduce(group, characters) };
+  return { characters, decomposition: reduceCharacters(group, characters) };
 }
 
 /**
