@@ -112,6 +112,18 @@ export const MOLECULES: Record<string, { group: string; atoms: Atom[] }> = {
     group: 'Ih',
     atoms: cyclic([...signs('C', 0, 0.7, 0.7 * 3 * PHI), ...signs('C', 0.7, 0.7 * (2 + PHI), 0.7 * 2 * PHI), ...signs('C', 0.7 * PHI, 1.4, 0.7 * (2 * PHI + 1))]),
   },
+  // Ethane twisted between staggered and eclipsed (D3): top H at 0°, bottom H at 40° (C2′ along 20°, so rotate by −20°).
+  'ethane (twisted)': { group: 'D3', atoms: [at('C', 0, 0, 0.77), at('C', 0, 0, -0.77), ...ring('H', 3, 1.02, 1.16, -20), ...ring('H', 3, 1.02, -1.16, 20)] },
+  // Invented S4 test structure: a centre and the S4 orbit of (1.0, 0.3, 0.5): (x, y, z) → (y, −x, −z).
+  'XY4 (S4, synthetic)': {
+    group: 'S4',
+    atoms: [at('Si', 0, 0, 0), at('F', 1, 0.3, 0.5), at('F', 0.3, -1, -0.5), at('F', -1, -0.3, 0.5), at('F', -0.3, 1, -0.5)],
+  },
+  // Invented Ci test structure: two inversion-related halves with nothing at the centre.
+  'anti CHClF–CHClF (Ci)': {
+    group: 'Ci',
+    atoms: [at('C', 0.2, 0.7, 0.1), at('C', -0.2, -0.7, -0.1), at('H', 1.1, 0.9, 0.6), at('H', -1.1, -0.9, -0.6), at('Cl', -0.6, 1.4, 1.2), at('Cl', 0.6, -1.4, -1.2), at('F', 0.1, 1.5, -1.0), at('F', -0.1, -1.5, 1.0)],
+  },
   HCl: { group: 'C∞v', atoms: [at('H', 0, 0, -1.24), at('Cl', 0, 0, 0.04)] },
   N2: { group: 'D∞h', atoms: [at('N', 0, 0, 0.55), at('N', 0, 0, -0.55)] },
   CHFClBr: { group: 'C1', atoms: [at('C', 0, 0, 0), at('H', 0.6, 0.6, 0.6), at('F', -0.8, -0.7, 0.75), at('Cl', -1.0, 1.0, -1.0), at('Br', 1.1, -1.2, -1.0)] },
