@@ -105,7 +105,9 @@ describe('activity counts (REFERENCES §3)', () => {
   it('lists per-mode activity with components', () => {
     const modes = analyseVibrations('C2v', MOLECULES.CH2Cl2.atoms).vibrations.modes;
     const a2 = modes.find((m) => m.label === 'A2')!;
-    expect(a2).toMatchObject({ count: 1, degeneracy: 1, ir: false, raman: true, irComponents: [], ramanComponents: ['xy'] });
+    expect(a2).toMatchObject({ count: 1, degeneracy: 1, ir: false, raman: true, irComponents: [], ramanComponents: ['xy'], activity: 'Raman' });
+    const silent = analyseVibrations('Oh', MOLECULES.SF6.atoms).vibrations.modes.find((m) => m.label === 'T2u')!;
+    expect(silent.activity).toBe('silent');
     const e = analyseVibrations('Td', MOLECULES.CH4.atoms).vibrations.modes.find((m) => m.label === 'T2')!;
     expect(e).toMatchObject({ count: 2, degeneracy: 3, ir: true, irComponents: ['x', 'y', 'z'] });
   });
@@ -119,6 +121,7 @@ describe('Γ3N bookkeeping and bad input', () => {
     expect(r.gamma3N.characters).toEqual([9, -1, 1, 3]);
     expect(r.gammaTrans.decomposition).toEqual({ A1: 1, B1: 1, B2: 1 });
     expect(r.gammaRot.decomposition).toEqual({ A2: 1, B1: 1, B2: 1 });
+    expect(r.gammaVib.characters).toEqual([3, 1, 1, 3]);
     expect(JSON.parse(JSON.stringify(r))).toEqual(r);
   });
 

@@ -29,6 +29,8 @@ export interface VibrationalMode extends IrrepActivity {
   /** How many fundamentals of this species (n in n·Γ). */
   readonly count: number;
   readonly degeneracy: number;
+  /** One word for the activity table. */
+  readonly activity: 'IR and Raman' | 'IR' | 'Raman' | 'silent';
   /** Of those fundamentals, how many are bond stretches and how many deformations; null without bonds. */
   readonly stretches: number | null;
   readonly deformations: number | null;
@@ -56,6 +58,7 @@ export interface VibrationalAnalysis {
   readonly gamma3N: Representation;
   readonly gammaTrans: Representation;
   readonly gammaRot: Representation;
+  readonly gammaVib: Representation;
   readonly vibrations: ActivityCounts & { readonly gamma: Decomposition; readonly modes: readonly VibrationalMode[] };
   readonly internalCoordinates: InternalCoordinates | null;
   readonly cautions: readonly string[];
@@ -91,6 +94,7 @@ export function analyseVibrations(groupName: string, atoms: readonly Atom[], opt
       count,
       degeneracy: irrepByLabel(group, label).dimension,
       ...activity,
+      activity: activity.ir ? (activity.raman ? 'IR and Raman' : 'IR') : activity.raman ? 'Raman' : 'silent',
       stretches: nStretch,
       deformations: nStretch === null ? null : count - nStretch,
       composition: nStretch === null ? null : describeSplit(nStretch, count - nStretch),
@@ -107,6 +111,7 @@ export function analyseVibrations(groupName: string, atoms: readonly Atom[], opt
     gamma3N: g.gamma3N,
     gammaTrans: g.gammaTrans,
     gammaRot: g.gammaRot,
+    gammaVib: g.gammaVib,
     vibrations: { ...activityCounts(group, vib), gamma: vib, modes },
     internalCoordinates: internal,
     cautions: CAUTIONS,
