@@ -1,6 +1,8 @@
 /**
  * Labels, class orders and rows against published character tables: Cotton, Chemical Applications of
  * Group Theory, 3rd ed., Appendix IIA (from memory), with the axis conventions stated in types.ts.
+ * Cross-checks READ on online character-table collections: the D4h rows and the D3h class order on
+ * G. Katzer's character-table pages, the D5d class order and E1g/E1u rows on webqc.org's D5d table.
  */
 import { describe, expect, it } from 'vitest';
 import { pointGroup } from './catalogue.js';
@@ -36,6 +38,8 @@ describe('published table conventions (Cotton App. IIA, from memory)', () => {
     expect(basis('D4h', 'B1g')).toEqual(['x²−y²']);
     expect(basis('D4h', 'B2g')).toEqual(['xy']);
     expect(row('D4h', 'B2u')).toEqual([1, -1, 1, -1, 1, -1, 1, -1, 1, -1]);
+    expect(row('D4h', 'B1g')).toEqual([1, -1, 1, 1, -1, 1, -1, 1, 1, -1]);
+    expect(row('D4h', 'Eu')).toEqual([2, 0, -2, 0, 0, -2, 0, 2, 0, 0]);
     expect(basis('D4h', 'Eu')).toEqual(['x', 'y']);
   });
 
@@ -66,6 +70,10 @@ describe('published table conventions (Cotton App. IIA, from memory)', () => {
   it('D3d and D5d class orders; D5d lists 2S10³ before 2S10', () => {
     expect(classes('D3d')).toEqual(['E', '2C3', '3C2', 'i', '2S6', '3σd']);
     expect(classes('D5d')).toEqual(['E', '2C5', '2C5²', '5C2', 'i', '2S10³', '2S10', '5σd']);
+    const e1u = row('D5d', 'E1u');
+    const c72 = 2 * Math.cos((2 * Math.PI) / 5);
+    const c144 = 2 * Math.cos((4 * Math.PI) / 5);
+    [2, c72, c144, 0, -2, -c72, -c144, 0].forEach((x, i) => expect(e1u[i]).toBeCloseTo(x, 12));
     expect(basis('D3d', 'A2u')).toEqual(['z']);
     expect(basis('D3d', 'Eu')).toEqual(['x', 'y']);
   });
