@@ -125,7 +125,11 @@ for (let n = 2; n <= 6; n++) {
       : spec(`D${n}d`, cosetClasses(dnClasses(n), INVERSION, [`σd`]), timesInversion(pointGroup(`D${n}`)));
 }
 RECIPES.D8 = () => spec('D8', dnClasses(8), axialIrreps(8, true));
-RECIPES.D8h = () => dnhSpec(8);
+// D8h is not in that appendix: its class order (rotations by increasing angle, the i-coset in the same order) is ours.
+RECIPES.D8h = () => ({
+  ...dnhSpec(8),
+  reference: 'Labels as in Cotton for D4h/D6h (from memory); class order by rotation angle, i-coset in the same order (our choice)',
+});
 
 const built = new Map<string, PointGroup>();
 
