@@ -70,6 +70,11 @@ describe('combination levels and transitions', () => {
     expect(t.final.decomposition).toEqual({ 'Σg+': 1, Δg: 1 });
     expect(t.ir).toBe(false);
     expect(t.ramanComponents).toEqual(expect.arrayContaining(['z²', 'x²+y²']));
+    // Per component: the Σg+ part is Raman-allowed through x²+y² and z², the Δg part through x²−y² and xy.
+    expect(t.components).toEqual([
+      { initial: 'Σg+', final: 'Σg+', ir: false, irComponents: [], raman: true, ramanComponents: ['z²', 'x²+y²'] },
+      { initial: 'Σg+', final: 'Δg', ir: false, irComponents: [], raman: true, ramanComponents: ['x²−y²', 'xy'] },
+    ]);
   });
 
   it('hot band ν2 → 2ν2 of CO2 is IR-allowed; ν2 → ν3 is not', () => {

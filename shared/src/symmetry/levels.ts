@@ -18,6 +18,16 @@ export interface Excitation {
   readonly quanta: number;
 }
 
+/** Selection rules between one symmetry component of each level (e.g. the Σg+ part of 2ν2). */
+export interface ComponentTransition {
+  readonly initial: string;
+  readonly final: string;
+  readonly ir: boolean;
+  readonly irComponents: readonly CartesianComponent[];
+  readonly raman: boolean;
+  readonly ramanComponents: readonly string[];
+}
+
 /** Selection rules for one transition between two vibrational levels. */
 export interface TransitionActivity {
   readonly initial: Representation;
@@ -28,6 +38,8 @@ export interface TransitionActivity {
   readonly irComponents: readonly CartesianComponent[];
   readonly raman: boolean;
   readonly ramanComponents: readonly string[];
+  /** The same rules for each pair of symmetry components of the two levels. */
+  readonly components: readonly ComponentTransition[];
 }
 
 /** Symmetry of the level with these excitations (the ground state for an empty list). */
@@ -48,20 +60,24 @@ export function transitionActivity(
   guardLambda(group, [...initial, ...final]);
   const gi = levelSymmetry(group, initial);
   const gf = levelSymmetry(group, final);
-  const characters = directProduct(gi.characters, gf.characters);
+  const overall = allowed(group, gi.characters, gf.characters);
+  const components = Object.keys(gi.decomposition).flatMap((li) =>
+    Object.keys(gf.decomposition).map((lf) => {
+      const { ir, irComponents, raman, ramanComponents } = allowed(group, irrepByLabel(group, li).characters, irrepByLabel(group, lf).characters);
+      return { initial: li, final: lf, ir, irComponents, raman, ramanComponents };
+    }),
+  );
+  return { initial: gi, final: gf, ...overall, components };
+}
+
+/** Γi ⊗ Γf and the dipole and polarisability components it contains (Γi ⊗ Γμ ⊗ Γf ∋ A1 for real irreps). */
+function allowed(group: PointGroup, ci: readonly number[], cf: readonly number[]) {
+  const characters = directProduct(ci, cf);
   const product = { characters, decomposition: reduceCharacters(group, characters) };
   const present = Object.keys(product.decomposition).map((l) => irrepByLabel(group, l));
   const irComponents = (['x', 'y', 'z'] as const).filter((c) => present.some((ir) => ir.translations.includes(c)));
   const ramanComponents = [...new Set(present.flatMap((ir) => ir.quadratics))];
-  return {
-    initial: gi,
-    final: gf,
-    product,
-    ir: irComponents.length > 0,
-    irComponents,
-    raman: ramanComponents.length > 0,
-    ramanComponents,
-  };
+  return { product, ir: irComponents.length > 0, irComponents, raman: ramanComponents.length > 0, ramanComponents };
 }
 
 /** Linear groups run on a finite model that cannot tell |Λ| beyond its limit: refuse such levels. */
