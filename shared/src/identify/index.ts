@@ -9,3 +9,4 @@ export { rankLibrary, fastPass, type RankedCompound } from './rank.js';
 export { scoreCandidate, type AgainstPeak, type CandidateScore, type ExplainedPeak, type MissingBand, type ScoreParts } from './score-candidate.js';
 export { findMixture, type MixtureFit } from './mixture.js';
 export { MAX_TOLERANCE_CM1 } from './validate-input.js';
+export { identifySpectrum, type IdentifySpectrumOptions } from './identify-spectrum.js';

@@ -56,10 +56,62 @@ function buildModels(pool: readonly CompoundBands[], obs: ObservedPeaks, toleran
   return { y: keep.map((i) => yFull[i]!), columns: full.map((c) => Float64Array.from(keep, (i) => c[i]!)) };
 }
 
-function fit(models: Models, members: readonly number[]): { explained: number; shares: number[] } {
+interface Normal {
+  /** Gram matrix of the model columns, AᵀA. */
+  readonly gram: number[][];
+  /** Aᵀy. */
+  readonly aty: number[];
+}
+
+function normalEquations(models: Models): Normal {
   const { y, columns } = models;
-  const X = y.map((_, i) => members.map((m) => columns[m]![i]!));
-  const k = fcnnlsVector(X, y).K.to1DArray();
+  const k = columns.length;
+  const gram = columns.map(() => new Array<number>(k).fill(0));
+  const aty = new Array<number>(k).fill(0);
+  for (let a = 0; a < k; a++) {
+    const ca = columns[a]!;
+    for (let i = 0; i < y.length; i++) aty[a] += ca[i]! * y[i]!;
+    for (let b = a; b < k; b++) {
+      const cb = columns[b]!;
+      let s = 0;
+      for (let i = 0; i < y.length; i++) s += ca[i]! * cb[i]!;
+      gram[a]![b] = s;
+      gram[b]![a] = s;
+    }
+  }
+  return { gram, aty };
+}
+
+/**
+ * Least squares depends on the data only through AᵀA and Aᵀy, so each subset is solved by
+ * ml-fcnnls on the equivalent k×k system R x ≈ z (AᵀA = RᵀR, z = R⁻ᵀAᵀy) instead of the full grid.
+ */
+function subsetAmounts(normal: Normal, members: readonly number[]): number[] {
+  const k = members.length;
+  const g = members.map((a) => members.map((b) => normal.gram[a]![b]!));
+  const ridge = 1e-9 * g.reduce((s, row, i) => s + row[i]!, 0);
+  const r = g.map(() => new Array<number>(k).fill(0));
+  for (let i = 0; i < k; i++) {
+    for (let j = 0; j <= i; j++) {
+      let s = g[i]![j]! + (i === j ? ridge : 0);
+      for (let m = 0; m < j; m++) s -= r[i]![m]! * r[j]![m]!;
+      r[i]![j] = i === j ? Math.sqrt(Math.max(s, ridge)) : s / r[j]![j]!;
+    }
+  }
+  // r is the lower factor L (G = L Lᵀ); the system is Lᵀ x ≈ L⁻¹ Aᵀy.
+  const z = new Array<number>(k).fill(0);
+  for (let i = 0; i < k; i++) {
+    let s = normal.aty[members[i]!]!;
+    for (let m = 0; m < i; m++) s -= r[i]![m]! * z[m]!;
+    z[i] = s / r[i]![i]!;
+  }
+  const lt = r.map((_, i) => r.map((row) => row[i]!));
+  return fcnnlsVector(lt, z).K.to1DArray();
+}
+
+function fit(models: Models, normal: Normal, members: readonly number[]): { explained: number; shares: number[] } {
+  const { y, columns } = models;
+  const k = subsetAmounts(normal, members);
   let totalY = 0;
   let explained = 0;
   let totalFit = 0;
@@ -90,9 +142,10 @@ function subsets(n: number, size: number): number[][] {
 export function findMixture(pool: readonly CompoundBands[], obs: ObservedPeaks, toleranceCm1: number): MixtureFit | null {
   if (pool.length < 2 || obs.xCm1.length < 2) return null;
   const models = buildModels(pool, obs, toleranceCm1);
+  const normal = normalEquations(models);
   const best = (size: number) =>
     subsets(pool.length, size)
-      .map((members) => ({ members, ...fit(models, members) }))
+      .map((members) => ({ members, ...fit(models, normal, members) }))
       .reduce((a, b) => (b.explained > a.explained ? b : a));
   const single = best(1);
   const pair = best(2);
