@@ -32,8 +32,11 @@ export const DETAIL_POOL_SIZE = 40;
 export const MAX_CANDIDATES = 10;
 /** Candidates below this band agreement are not listed. */
 export const MIN_CANDIDATE_SCORE = 0.1;
-/** A hazardous candidate at or above this band agreement is listed even beyond MAX_CANDIDATES. */
-export const PLAUSIBLE_HAZARD_SCORE = 0.25;
+/**
+ * A hazardous candidate at or above this band agreement is plausible: listed even beyond
+ * MAX_CANDIDATES and named in the result's cautions when it is not first.
+ */
+export const PLAUSIBLE_HAZARD_SCORE = 0.4;
 /** At most this many hazardous candidates are added beyond MAX_CANDIDATES. */
 export const MAX_EXTRA_HAZARDOUS = 5;
 

@@ -4,6 +4,7 @@ import { escalationFor } from '../hazards/escalation.js';
 import { engineAnalyser } from '../library/engine-analyser.js';
 import { loadLibrary } from '../library/load.js';
 import type { SymmetryAnalyser } from '../library/symmetry-source.js';
+import type { Compound } from '../library/types.js';
 import type { Library } from '../library/validate-library.js';
 import {
   IDENTIFY_METHOD_VERSION,
@@ -87,20 +88,22 @@ export function identifyScan(input: IdentifyInput, options: IdentifyOptions = {}
   const reliable = input.quality?.reliable !== false && input.peaks.length > 0;
   let candidates: Candidate[] = [];
   let mixture: Mixture | null = null;
+  let hazardSources: readonly Compound[] = [];
   if (reliable) {
     const index = libraryIndexFor(library, options.analyser ?? engineAnalyser, input.technique, input.phase);
     const obs = observedPeaks(input.peaks);
     const ranked = rankLibrary(index, obs, toleranceCm1);
     candidates = pickListed(index, ranked);
     mixture = mixtureOf(index, ranked, obs, toleranceCm1);
+    hazardSources = ranked.map((r) => index.compounds[r.index]!);
   }
-  const byId = new Map(library.compounds.map((c) => [c.id, c]));
+  const hazardsOf = new Map(hazardSources.map((c) => [c.id, c.hazards]));
   const listedIds = new Set(candidates.map((c) => c.id));
   const escalationCandidates = [...candidates, ...(mixture?.components ?? []).filter((m) => !listedIds.has(m.id))].map((c) => ({
     id: c.id,
     name: c.name,
     score: c.score,
-    hazards: byId.get(c.id)!.hazards,
+    hazards: hazardsOf.get(c.id)!,
   }));
   return {
     technique: input.technique,

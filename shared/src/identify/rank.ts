@@ -56,10 +56,26 @@ export function fastPass(index: LibraryIndex, obs: ObservedPeaks, toleranceCm1: 
   return { touched, upper };
 }
 
+/** The k touched compounds with the highest upper bounds (a bounded insertion list: k ≪ touched). */
+function topByUpperBound(touched: readonly number[], upper: Float64Array, k: number): number[] {
+  const top: number[] = [];
+  for (const c of touched) {
+    const u = upper[c]!;
+    if (top.length === k && u <= upper[top[k - 1]!]!) continue;
+    let i = top.length < k ? top.length : k - 1;
+    while (i > 0 && upper[top[i - 1]!]! < u) {
+      if (i < k) top[i] = top[i - 1]!;
+      i--;
+    }
+    top[i] = c;
+  }
+  return top;
+}
+
 /** Rank the library for the observed peaks, best first (ties: hazardous compounds first, then id). */
 export function rankLibrary(index: LibraryIndex, obs: ObservedPeaks, toleranceCm1: number): RankedCompound[] {
   const { touched, upper } = fastPass(index, obs, toleranceCm1);
-  const pool = touched.sort((a, b) => upper[b]! - upper[a]!).slice(0, DETAIL_POOL_SIZE);
+  const pool = topByUpperBound(touched, upper, DETAIL_POOL_SIZE);
   const ranked = pool.map((i): RankedCompound => ({ index: i, ...scoreCandidate(index.bands[i]!, obs, toleranceCm1, index.technique) }));
   const hazardous = (i: number) => (index.compounds[i]!.hazards.classifications.length > 0 ? 0 : 1);
   return ranked.sort((a, b) => b.score - a.score || hazardous(a.index) - hazardous(b.index) || index.compounds[a.index]!.id.localeCompare(index.compounds[b.index]!.id));

@@ -1,6 +1,7 @@
 /** The cautions at the top of every result: general, laser, mixture and hazardous-alternative notes. */
 import { GENERAL_CAUTIONS, NO_RELIABLE_RESULT_CAUTION, RAMAN_LASER_CAUTION } from '../hazards/general-cautions.js';
 import type { Technique } from '../spectrum/types.js';
+import { PLAUSIBLE_HAZARD_SCORE } from './constants.js';
 import type { Candidate, Mixture } from './types.js';
 
 /** Cautions for a result; the general ones always, the laser caution on every Raman scan. */
@@ -13,7 +14,7 @@ export function resultCautions(technique: Technique, reliable: boolean, candidat
   }
   if (candidates.length === 0) out.push('No compound of the compound library matches this scan: the sample may be outside the library; treat it as unknown.');
   const top = candidates[0];
-  const hazardousOthers = candidates.filter((c, i) => i > 0 && c.hazards.some((h) => h.hazardous));
+  const hazardousOthers = candidates.filter((c, i) => i > 0 && c.score >= PLAUSIBLE_HAZARD_SCORE && c.hazards.some((h) => h.hazardous));
   if (top !== undefined && hazardousOthers.length > 0) {
     out.push(`Hazardous alternatives are also plausible (${hazardousOthers.map((c) => c.name).join(', ')}): read their caution cards, not only the first candidate's.`);
   }
