@@ -1,4 +1,4 @@
-import { whittakerSmooth } from './whittaker.js';
+import { whittakerSolver } from './whittaker.js';
 
 /**
  * Asymmetrically reweighted penalised least squares baseline (arPLS; S.-J. Baek et al.,
@@ -13,8 +13,11 @@ export function arplsBaseline(
   tolerance: number,
 ): { baseline: Float64Array; iterations: number } {
   const n = y.length;
+  if (n < 3) return { baseline: Float64Array.from(y), iterations: 0 };
+  const solve = whittakerSolver(n, lambda);
   let weights = new Float64Array(n).fill(1);
-  let baseline = whittakerSmooth(y, weights, lambda);
+  let next = new Float64Array(n);
+  let baseline = solve(y, weights);
   let iterations = 1;
   for (; iterations < maxIterations; iterations++) {
     let sum = 0;
@@ -31,7 +34,6 @@ export function arplsBaseline(
     if (count < 2) break;
     const mean = sum / count;
     const sd = Math.sqrt(Math.max(sumSq / count - mean * mean, 0)) || 1e-12;
-    const next = new Float64Array(n);
     let change = 0;
     let norm = 0;
     for (let i = 0; i < n; i++) {
@@ -42,8 +44,8 @@ export function arplsBaseline(
       change += (next[i] - weights[i]) ** 2;
       norm += weights[i] ** 2;
     }
-    weights = next;
-    baseline = whittakerSmooth(y, weights, lambda);
+    [weights, next] = [next, weights];
+    baseline = solve(y, weights);
     if (Math.sqrt(change / Math.max(norm, 1e-300)) < tolerance) break;
   }
   return { baseline, iterations };

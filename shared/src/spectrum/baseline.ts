@@ -26,8 +26,8 @@ export interface BaselineOptions {
  * times taller than the bands, so the baseline must bend more.
  */
 export const DEFAULT_BASELINE = {
-  ir: { method: 'arpls', lambda: 1e6, maxIterations: 100, tolerance: 0.001 },
-  raman: { method: 'arpls', lambda: 1e4, maxIterations: 100, tolerance: 0.001 },
+  ir: { method: 'arpls', lambda: 1e6, maxIterations: 50, tolerance: 0.001 },
+  raman: { method: 'arpls', lambda: 1e4, maxIterations: 50, tolerance: 0.001 },
 } as const satisfies Record<string, Required<BaselineOptions>>;
 
 /** Estimate a baseline under the bands and subtract it. */

@@ -21,7 +21,7 @@ export interface ProcessOptions {
   phase: Phase;
   /** IR only: the scan was taken on a diamond ATR accessory (correction and diamond-region flag). Default false. */
   atr?: boolean | AtrOptions;
-  /** Uniform grid step in cm⁻¹. Default: the scan's median point spacing. */
+  /** Uniform grid step in cm⁻¹. Default: the scan's median point spacing (at least span / (4 × points)). */
   gridStepCm1?: number;
   /** Transmittance below this fraction is clamped before A = −log10(T). Default 1e-4 (A = 4). */
   transmittanceFloor?: number;

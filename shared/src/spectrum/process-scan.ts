@@ -34,7 +34,11 @@ export interface ProcessedScan {
  */
 export function processScan(input: Spectrum, options: ProcessOptions): ProcessedScan {
   validateSpectrum(input);
-  const gridStepCm1 = options.gridStepCm1 ?? medianSpacing(input.xCm1);
+  const gridStepCm1 = options.gridStepCm1 ?? defaultGridStep(input.xCm1);
+  const span = input.xCm1[input.xCm1.length - 1] - input.xCm1[0];
+  if (span / gridStepCm1 > MAX_GRID_POINTS) {
+    throw new RangeError(`a ${gridStepCm1} cm⁻¹ grid over ${span.toFixed(1)} cm⁻¹ would need more than ${MAX_GRID_POINTS} points`);
+  }
   const settings = resolveProcessOptions(options, gridStepCm1);
   if (input.ordinate !== 'intensity' && settings.technique === 'raman') {
     throw new RangeError(`a Raman scan must hold intensity, but this one holds ${input.ordinate}`);
@@ -99,6 +103,16 @@ export function processScan(input: Spectrum, options: ProcessOptions): Processed
     quality,
     parameters,
   };
+}
+
+// Largest uniform grid processScan builds; handheld scans have a few thousand points.
+const MAX_GRID_POINTS = 200_000;
+
+// The median spacing, but never so fine that a few clustered points would blow the grid up
+// to more than four times the scan's own point count.
+function defaultGridStep(x: Float64Array): number {
+  const span = x[x.length - 1] - x[0];
+  return Math.max(medianSpacing(x), span / (4 * x.length));
 }
 
 function toAbsorbance(spectrum: Spectrum, floor: number): Float64Array {

@@ -116,3 +116,13 @@ describe('processScan, IR', () => {
     expect(() => processScan(raman, { technique: 'raman', phase: 'condensed', atr: true })).toThrow(/ATR/);
   });
 });
+
+describe('processScan grid', () => {
+  it('does not let a few clustered points blow up the grid', () => {
+    const x = Float64Array.from({ length: 400 }, (_, i) => (i < 390 ? 1000 + i * 1e-4 : 1000 + (i - 389) * 300));
+    const y = x.map((v) => 0.1 + 0.5 / (1 + ((v - 2500) / 40) ** 2));
+    const result = processScan({ xCm1: x, y, ordinate: 'absorbance', technique: 'ir' }, { technique: 'ir', phase: 'condensed' });
+    expect(result.parameters.pointCount).toBeLessThanOrEqual(1601);
+    expect(() => processScan({ xCm1: x, y, ordinate: 'absorbance', technique: 'ir' }, { technique: 'ir', phase: 'condensed', gridStepCm1: 1e-5 })).toThrow(/more than 200000 points/);
+  });
+});
