@@ -57,3 +57,13 @@ export const MIXTURE_SIGMA_FRACTION = 0.6;
 
 /** Version of the ranking method, recorded with every result. */
 export const IDENTIFY_METHOD_VERSION = '1.0.0';
+
+/**
+ * Gas cells: an unresolved parallel band shows its P and R maxima, not its centre. Two peaks of
+ * similar height (ratio ≤ PR_PAIR_MAX_HEIGHT_RATIO) this far apart count as a band at their
+ * midpoint. The span covers Δν(P–R) = 2.358·√(B·T) at 296 K from OCS (18 cm⁻¹) to HCl (131 cm⁻¹)
+ * (Herzberg 1945, computed in the project check values §4.2).
+ */
+export const PR_PAIR_MIN_SEPARATION_CM1 = 12;
+export const PR_PAIR_MAX_SEPARATION_CM1 = 140;
+export const PR_PAIR_MAX_HEIGHT_RATIO = 3;

@@ -91,7 +91,7 @@ export function identifyScan(input: IdentifyInput, options: IdentifyOptions = {}
   let hazardSources: readonly Compound[] = [];
   if (reliable) {
     const index = libraryIndexFor(library, options.analyser ?? engineAnalyser, input.technique, input.phase);
-    const obs = observedPeaks(input.peaks);
+    const obs = observedPeaks(input.peaks, input.phase === 'gas');
     const ranked = rankLibrary(index, obs, toleranceCm1);
     candidates = pickListed(index, ranked);
     mixture = mixtureOf(index, ranked, obs, toleranceCm1);

@@ -42,6 +42,24 @@ export function fastPass(index: LibraryIndex, obs: ObservedPeaks, toleranceCm1: 
       }
     });
   }
+  // Gas scans: a P/R pair probes at its midpoint and, when it matches, explains both peaks.
+  const pairs = obs.pairs;
+  const lastPair = new Int32Array(n).fill(-1);
+  const sharp = index.sharp;
+  const bestSharp = best[0]!;
+  for (let p = 0; p < pairs.midCm1.length; p++) {
+    const x = pairs.midCm1[p]!;
+    for (let i = lowerBound(sharp.positionCm1, x - toleranceCm1); i < sharp.positionCm1.length && sharp.positionCm1[i]! <= x + toleranceCm1; i++) {
+      const c = closeness(x - sharp.positionCm1[i]!, toleranceCm1);
+      if (c > bestSharp[i]!) bestSharp[i] = c;
+      const owner = sharp.owner[i]!;
+      if (lastPair[owner] !== p) {
+        if (lastPeak[owner] === -1 && lastPair[owner] === -1) touched.push(owner);
+        lastPair[owner] = p;
+        explainedHeight[owner] += obs.relativeHeight[pairs.first[p]!]! + obs.relativeHeight[pairs.second[p]!]!;
+      }
+    }
+  }
   const found = new Float64Array(n);
   tables.forEach((t, k) => {
     const bestK = best[k]!;
@@ -51,7 +69,7 @@ export function fastPass(index: LibraryIndex, obs: ObservedPeaks, toleranceCm1: 
   const totalHeight = obs.totalHeight > 0 ? obs.totalHeight : 1;
   for (const c of touched) {
     const w = index.totalWeight[c]!;
-    upper[c] = bandAgreement(w > 0 ? found[c]! / w : 0, explainedHeight[c]! / totalHeight, 0);
+    upper[c] = bandAgreement(w > 0 ? found[c]! / w : 0, Math.min(1, explainedHeight[c]! / totalHeight), 0);
   }
   return { touched, upper };
 }

@@ -61,12 +61,12 @@ export interface CandidateScore {
   readonly against: readonly AgainstPeak[];
 }
 
-function nearestWithin(obs: ObservedPeaks, cm1: number, window: number): number {
-  const i = lowerBound(obs.xCm1, cm1 - window);
+function nearestWithin(sorted: Float64Array, cm1: number, window: number): number {
+  const i = lowerBound(sorted, cm1 - window);
   let best = -1;
   let bestDelta = Infinity;
-  for (let j = i; j < obs.xCm1.length && obs.xCm1[j]! <= cm1 + window; j++) {
-    const d = Math.abs(obs.xCm1[j]! - cm1);
+  for (let j = i; j < sorted.length && sorted[j]! <= cm1 + window; j++) {
+    const d = Math.abs(sorted[j]! - cm1);
     if (d < bestDelta) {
       bestDelta = d;
       best = j;
@@ -87,8 +87,25 @@ export function scoreCandidate(bands: CompoundBands, obs: ObservedPeaks, toleran
   for (const b of bands.expected) {
     total += b.weight;
     const window = bandWindow(toleranceCm1, b.halfWidthCm1);
-    const j = nearestWithin(obs, b.cm1, window);
+    const j = nearestWithin(obs.xCm1, b.cm1, window);
     if (j < 0) {
+      const p = b.halfWidthCm1 === 0 ? nearestWithin(obs.pairs.midCm1, b.cm1, window) : -1;
+      if (p >= 0) {
+        found += b.weight * closeness(obs.pairs.midCm1[p]! - b.cm1, window);
+        for (const [k, branch] of [[obs.pairs.first[p]!, 'P'], [obs.pairs.second[p]!, 'R']] as const) {
+          explainedFlag[k] = 1;
+          explained.push({
+            x: obs.xCm1[k]!,
+            relativeHeight: obs.relativeHeight[k]!,
+            expectedCm1: b.cm1,
+            deltaCm1: obs.xCm1[k]! - b.cm1,
+            ...ref(b),
+            assignment: `${b.assignment} (${branch} branch maximum)`,
+            intensity: b.intensity,
+          });
+        }
+        continue;
+      }
       if (b.weight >= MISSING_REPORT_WEIGHT) missing.push({ expectedCm1: b.cm1, ...ref(b), assignment: b.assignment, intensity: b.intensity });
       continue;
     }
@@ -111,7 +128,7 @@ export function scoreCandidate(bands: CompoundBands, obs: ObservedPeaks, toleran
   const other = technique === 'ir' ? 'Raman' : 'IR';
   const here = technique === 'ir' ? 'IR' : 'Raman';
   for (const b of bands.forbidden) {
-    const j = nearestWithin(obs, b.cm1, toleranceCm1);
+    const j = nearestWithin(obs.xCm1, b.cm1, toleranceCm1);
     if (j < 0 || explainedFlag[j] || obs.relativeHeight[j]! < AGAINST_MIN_RELATIVE_HEIGHT) continue;
     if (!against.some((a) => a.x === obs.xCm1[j])) againstHeight += obs.relativeHeight[j]!;
     against.push({

@@ -8,6 +8,7 @@ import { identifyScan } from '../identify-scan.js';
 
 const peaks = (...list: [number, number][]): Peak[] => list.map(([x, height]) => ({ x, height, widthCm1: 8, relativeHeight: height }));
 const candidate = (r: ReturnType<typeof identifyScan>, id: string) => r.candidates.find((c) => c.id === id);
+const candidateOf = candidate;
 
 describe('evidence against from the selection rules', () => {
   it('a Raman scan of CO2 with a band at the IR-only ν3 position lists it against CO2', () => {
@@ -81,6 +82,22 @@ describe('reliability, cautions and escalation', () => {
     expect(r.parameters.toleranceCm1).toBe(DEFAULT_TOLERANCE_GAS_CM1);
     expect(r.parameters.libraryCompounds).toBe(loadLibrary().compounds.length);
     expect(r.candidates[0]!.id).toBe('carbon-monoxide');
+  });
+});
+
+describe('gas cells', () => {
+  it('reads an unresolved CO band from its P and R maxima', () => {
+    // CO band origin 2143.27 (NIST SP 821); Δν(P–R) = 2.358·√(B·T) = 56.25 cm⁻¹ at 296 K (project check values §4.2, computed).
+    const r = identifyScan({ technique: 'ir', phase: 'gas', peaks: peaks([2143.27 - 28.1, 1], [2143.27 + 28.1, 0.9]) });
+    expect(r.candidates[0]!.id).toBe('carbon-monoxide');
+    expect(r.candidates[0]!.explained.map((e) => e.assignment)).toEqual([
+      expect.stringContaining('P branch'),
+      expect.stringContaining('R branch'),
+    ]);
+  });
+  it('does not pair peaks in a condensed-phase scan', () => {
+    const r = identifyScan({ technique: 'ir', phase: 'condensed', peaks: peaks([2143.27 - 28.1, 1], [2143.27 + 28.1, 0.9]) });
+    expect(candidateOf(r, 'carbon-monoxide')).toBeUndefined();
   });
 });
 
