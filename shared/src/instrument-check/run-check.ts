@@ -62,13 +62,17 @@ export function runInstrumentCheck(spectrum: Spectrum, standardId: string, optio
   const to = spectrum.xCm1[spectrum.xCm1.length - 1];
   const window = options.searchWindowCm1 ?? standard.searchWindowCm1;
   const positions = standard.bands.map((b) => b.positionCm1);
-  const bands = standard.bands.map((band) => checkBand(band, peaks, windowFor(band.positionCm1, positions, window), options.tolerance, from, to));
+  const bands = standard.bands.map((band) =>
+    checkBand(band, peaks, windowFor(band.positionCm1, positions, window), options.tolerance, from, to),
+  );
 
   const inRange = bands.filter((b) => b.status !== 'out-of-range');
   const minBands = options.minBandsInRange ?? 3;
   const failures: string[] = [];
   if (!processed.quality.reliable) failures.push(`the scan is unreliable (${processed.quality.reasons.join('; ')})`);
-  if (inRange.length < minBands) failures.push(`only ${inRange.length} reference bands lie in the scanned range ${from.toFixed(0)}–${to.toFixed(0)} cm⁻¹; at least ${minBands} are needed`);
+  if (inRange.length < minBands) {
+    failures.push(`only ${inRange.length} reference bands lie in the scanned range ${from.toFixed(0)}–${to.toFixed(0)} cm⁻¹; at least ${minBands} are needed`);
+  }
   const off = bands.filter((b) => b.status === 'out-of-tolerance');
   const missing = bands.filter((b) => b.status === 'missing');
   if (off.length > 0) {
@@ -77,12 +81,11 @@ export function runInstrumentCheck(spectrum: Spectrum, standardId: string, optio
         off.map((b) => `${b.expectedCm1} (${signed(b.offsetCm1!)} cm⁻¹, allowed ±${b.toleranceCm1})`).join(', '),
     );
   }
-  if (missing.length > 0) failures.push(`${missing.length} band${missing.length > 1 ? 's' : ''} not found: ${missing.map((b) => b.expectedCm1).join(', ')}`);
+  if (missing.length > 0) {
+    failures.push(`${missing.length} band${missing.length > 1 ? 's' : ''} not found: ${missing.map((b) => b.expectedCm1).join(', ')}`);
+  }
   const pass = failures.length === 0;
-  const worst = inRange.reduce<BandCheck | undefined>((w, b) => (w === undefined || Math.abs(b.offsetCm1 ?? 0) > Math.abs(w.offsetCm1 ?? 0) ? b : w), undefined);
-  const reason = pass
-    ? `all ${inRange.length} bands in range within tolerance (largest offset ${signed(worst?.offsetCm1 ?? 0)} cm⁻¹ at ${worst?.expectedCm1})`
-    : failures.join('; ');
+  const reason = pass ? passReason(inRange) : failures.join('; ');
   return {
     standardId: standard.id,
     standardName: standard.name,
@@ -101,20 +104,30 @@ function windowFor(position: number, positions: readonly number[], window: numbe
   return Math.min(window, gap / 2);
 }
 
-function checkBand(band: ReferenceBand, peaks: readonly Peak[], window: number, tolerance: number | undefined, from: number, to: number): BandCheck {
+function checkBand(
+  band: ReferenceBand,
+  peaks: readonly Peak[],
+  window: number,
+  tolerance: number | undefined,
+  from: number,
+  to: number,
+): BandCheck {
   const toleranceCm1 = tolerance ?? band.toleranceCm1;
   const base = { expectedCm1: band.positionCm1, toleranceCm1, band };
   if (band.positionCm1 < from || band.positionCm1 > to) {
     return { ...base, foundCm1: null, offsetCm1: null, withinTolerance: false, status: 'out-of-range' };
   }
-  const nearest = peaks.reduce<Peak | undefined>(
-    (best, p) => (Math.abs(p.x - band.positionCm1) <= window && (!best || Math.abs(p.x - band.positionCm1) < Math.abs(best.x - band.positionCm1)) ? p : best),
-    undefined,
-  );
+  const distance = (p: Peak) => Math.abs(p.x - band.positionCm1);
+  const nearest = peaks.filter((p) => distance(p) <= window).sort((a, b) => distance(a) - distance(b))[0];
   if (!nearest) return { ...base, foundCm1: null, offsetCm1: null, withinTolerance: false, status: 'missing' };
   const offsetCm1 = nearest.x - band.positionCm1;
   const withinTolerance = Math.abs(offsetCm1) <= toleranceCm1;
   return { ...base, foundCm1: nearest.x, offsetCm1, withinTolerance, status: withinTolerance ? 'pass' : 'out-of-tolerance' };
+}
+
+function passReason(inRange: readonly BandCheck[]): string {
+  const worst = [...inRange].sort((a, b) => Math.abs(b.offsetCm1!) - Math.abs(a.offsetCm1!))[0];
+  return `all ${inRange.length} bands in range within tolerance (largest offset ${signed(worst.offsetCm1!)} cm⁻¹ at ${worst.expectedCm1})`;
 }
 
 function signed(v: number): string {

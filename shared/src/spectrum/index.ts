@@ -41,3 +41,4 @@ export {
   type QualityOptions,
 } from './process-options.js';
 export { validateSpectrum } from './validate.js';
+export { SCAN_CAUTIONS, scanCautions } from './cautions.js';

@@ -1,4 +1,5 @@
 import { atrCorrection } from './atr.js';
+import { scanCautions } from './cautions.js';
 import { medianSpacing, resampleUniform } from './axis.js';
 import { estimateBaseline } from './baseline.js';
 import { interferenceRegions, separateFlaggedPeaks } from './interferences.js';
@@ -25,6 +26,8 @@ export interface ProcessedScan {
   readonly flaggedPeaks: FlaggedPeak[];
   readonly quality: ScanQuality;
   readonly parameters: ProcessParameters;
+  /** Safety cautions to show with any result from this scan. */
+  readonly cautions: readonly string[];
 }
 
 /**
@@ -68,6 +71,7 @@ export function processScan(input: Spectrum, options: ProcessOptions): Processed
     noiseSigma: rawSigma,
     saturation,
     spikesRemoved: despiked.spikesRemoved,
+    technique: settings.technique,
     ...settings.quality,
   });
   const parameters: ProcessParameters = {
@@ -102,6 +106,7 @@ export function processScan(input: Spectrum, options: ProcessOptions): Processed
     flaggedPeaks: lowSignal ? [] : split.flaggedPeaks,
     quality,
     parameters,
+    cautions: scanCautions(settings.technique),
   };
 }
 

@@ -1,4 +1,4 @@
-import type { Peak, ScanQuality } from './types.js';
+import type { Peak, ScanQuality, Technique } from './types.js';
 
 /** What the quality verdict looks at. */
 export interface QualityInput {
@@ -6,6 +6,7 @@ export interface QualityInput {
   readonly noiseSigma: number;
   readonly saturation: { readonly saturated: boolean; readonly longestRun: number };
   readonly spikesRemoved: number;
+  readonly technique: Technique;
   readonly minSnr: number;
   readonly minPeaks: number;
 }
@@ -19,9 +20,11 @@ export function judgeQuality(input: QualityInput): ScanQuality {
     reasons.push(`low signal-to-noise: ${snr.toFixed(1)} (at least ${input.minSnr} needed); rescan with longer integration or more sample`);
   }
   if (input.saturation.saturated) {
-    reasons.push(
-      `detector saturation: flat top over ${input.saturation.longestRun} points; reduce integration time or laser power, or use less sample`,
-    );
+    const remedy =
+      input.technique === 'raman'
+        ? 'shorten the integration time; lower the laser power rather than raising it (dark samples can heat and ignite)'
+        : 'use a thinner layer or less sample';
+    reasons.push(`detector saturation: flat top over ${input.saturation.longestRun} points; ${remedy}`);
   }
   if (input.peaks.length < input.minPeaks) {
     reasons.push(`too few peaks: ${input.peaks.length} found, at least ${input.minPeaks} needed`);

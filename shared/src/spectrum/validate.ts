@@ -1,7 +1,8 @@
+import { DEFAULT_MIN_POINTS } from './import-options.js';
 import type { Spectrum } from './types.js';
 
 /** Check a Spectrum handed to processing: equal lengths, finite values, strictly ascending x. */
-export function validateSpectrum(spectrum: Spectrum, minPoints = 16): void {
+export function validateSpectrum(spectrum: Spectrum, minPoints = DEFAULT_MIN_POINTS): void {
   const { xCm1, y } = spectrum;
   if (!(xCm1 instanceof Float64Array) || !(y instanceof Float64Array)) throw new TypeError('xCm1 and y must be Float64Arrays');
   if (xCm1.length !== y.length) throw new RangeError(`xCm1 has ${xCm1.length} points but y has ${y.length}`);

@@ -53,7 +53,14 @@ describe('processScan, Raman', () => {
     const result = processScan({ ...scan, y: clipped }, { technique: 'raman', phase: 'condensed' });
     expect(result.quality.saturated).toBe(true);
     expect(result.quality.reliable).toBe(false);
-    expect(result.quality.reasons.join(' ')).toMatch(/saturation/);
+    expect(result.quality.reasons.join(' ')).toMatch(/saturation.*lower the laser power/);
+  });
+
+  it('carries the presumptive-identification and laser cautions', () => {
+    const { cautions } = processScan(scan, { technique: 'raman', phase: 'condensed' });
+    expect(cautions.join(' ')).toMatch(/presumptive.*laboratory/);
+    expect(cautions.join(' ')).toMatch(/SDS/);
+    expect(cautions.join(' ')).toMatch(/ignite/);
   });
 
   it('says a scan of noise is too weak and returns no noise peaks', () => {
