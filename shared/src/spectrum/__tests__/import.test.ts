@@ -151,6 +151,18 @@ describe('JCAMP-DX', () => {
     expectImportError(() => importSpectrum(lines.join('\n')), 'not-numeric', /declares 64 points/);
   });
 
+  it('keeps the good block of a LINK file when the other is corrupted, and says why it refused that one', () => {
+    const text = fixtureText('spectra/synthetic-two-blocks.jdx');
+    const lines = text.split('\n');
+    const ramanData = lines.findIndex((l, i) => i > lines.indexOf('##DATA TYPE=RAMAN SPECTRUM') && l.startsWith('##XYDATA')) + 3;
+    lines.splice(ramanData, 2);
+    const all = importJcampAll(lines.join('\n'));
+    expect(all.blocks.map((b) => b.index)).toEqual([0]);
+    expect(all.refused.map((r) => [r.index, r.error.code])).toEqual([[1, 'not-numeric']]);
+    expectImportError(() => importSpectrum(lines.join('\n'), { technique: 'raman' }), 'technique-mismatch', /no Raman block/);
+    expectImportError(() => importSpectrum(lines.join('\n'), { block: 1 }), 'not-numeric', /declares 1501 points/);
+  });
+
   it('refuses unknown JCAMP-DX units with the label named', () => {
     const text = fromJSON({ x, y }, { info: { ...info, yUnits: 'KUBELKA-MUNK' }, xyEncoding: 'DIF' });
     const e = expectImportError(() => importSpectrum(text), 'unknown-units');
