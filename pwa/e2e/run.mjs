@@ -4,7 +4,7 @@ import assert from 'node:assert/strict';
 import { after, before, describe, it } from 'node:test';
 import { blockingViolations } from './axe.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
-import { openTab, pageTitle, signIn, signInTo, signOut, storedRefreshToken, tabLabels, waitForServiceWorker } from './shell.mjs';
+import { openTab, pageTitle, signIn, waitForPage, signInTo, signOut, storedRefreshToken, tabLabels, waitForServiceWorker } from './shell.mjs';
 
 const BASE_URL = (process.env.BASE_URL || '').replace(/\/$/, '');
 const PASSWORD = process.env.SITEBAND_DEMO_PASSWORD || 'siteband-demo-2026';
@@ -51,7 +51,7 @@ describe('Siteband PWA shell', { concurrency: false }, () => {
     const { page } = browser;
     await page.goto(`${BASE_URL}/`);
     await page.waitForURL(/\/signin$/);
-    await pageTitle(page, 'Sign in').waitFor();
+    await waitForPage(page, 'Sign in');
     await assertAccessible(page, 'the sign-in page');
     await screenshot(page, 'signin-1024x768');
 
@@ -91,7 +91,7 @@ describe('Siteband PWA shell', { concurrency: false }, () => {
       assert.equal(await refreshStatus(refreshToken), 401, 'sign-out revoked the refresh token on the server');
       assert.equal(await storedRefreshToken(page), undefined, 'sign-out removed the session from the tablet');
       await page.reload();
-      await pageTitle(page, 'Sign in').waitFor();
+      await waitForPage(page, 'Sign in');
       assert.equal(await page.locator('ion-tab-bar').count(), 0, 'signed out stays signed out after a reload');
     });
   }
@@ -100,7 +100,7 @@ describe('Siteband PWA shell', { concurrency: false }, () => {
     const { page } = browser;
     await signInTo(page, BASE_URL, 'inspector@demo.test', PASSWORD, 'Cases');
     await page.goto(`${BASE_URL}/tabs/users`);
-    await pageTitle(page, 'Cases').waitFor();
+    await waitForPage(page, 'Cases');
     assert.match(page.url(), /\/tabs\/cases$/);
     assert.equal(await pageTitle(page, 'Users').count(), 0);
     await signOut(page);
@@ -111,7 +111,7 @@ describe('Siteband PWA shell', { concurrency: false }, () => {
     await signInTo(page, BASE_URL, 'supervisor@demo.test', PASSWORD, 'Review queue');
     await openTab(page, 'Compound library');
     await page.getByText('Open the structure check').click();
-    await pageTitle(page, 'Structure check').waitFor();
+    await waitForPage(page, 'Structure check');
     assert.match(page.url(), /\/tabs\/library\/structure$/);
     await assertAccessible(page, 'the structure check page');
     await screenshot(page, 'supervisor-structure-check');
@@ -133,20 +133,20 @@ describe('administering users', { concurrency: false }, () => {
     const email = `e2e-${Date.now()}@demo.test`;
     const name = `Field Trial ${Date.now() % 100000}`;
     await signInTo(page, BASE_URL, 'admin@demo.test', PASSWORD, 'Users');
-    await page.getByRole('table').waitFor();
+    await page.getByRole('table');
 
     await page.getByLabel('Full name').fill(name);
     await page.getByLabel('Email', { exact: true }).fill(email);
     await page.getByLabel('Role', { exact: true }).selectOption('inspector');
     await page.getByLabel('First password').fill(`${PASSWORD}-e2e`);
     await page.getByRole('button', { name: 'Create user' }).click();
-    await page.getByRole('status').filter({ hasText: `${name} can now sign in as Inspector.` }).waitFor();
+    await page.getByRole('status').filter({ hasText: `${name} can now sign in as Inspector.` });
 
     const row = page.getByTestId(`user-row-${email}`);
     await row.waitFor();
     await row.getByLabel(`Role of ${name}`).selectOption('safety_officer');
     await row.getByRole('button', { name: `Deactivate ${name}` }).click();
-    await row.getByText('Deactivated').waitFor();
+    await row.getByText('Deactivated');
     await assertAccessible(page, 'the users page');
     await screenshot(page, 'admin-users-after-changes');
 
@@ -159,7 +159,7 @@ describe('administering users', { concurrency: false }, () => {
     // The deactivated person can no longer sign in.
     await signOut(page);
     await signIn(page, BASE_URL, email, `${PASSWORD}-e2e`);
-    await page.getByRole('alert').waitFor();
+    await page.getByRole('alert');
     assert.match(page.url(), /\/signin$/);
   });
 });
@@ -186,7 +186,7 @@ describe('offline', { concurrency: false }, () => {
     });
     await context.setOffline(true);
     await page.reload();
-    await pageTitle(page, 'Account').waitFor();
+    await waitForPage(page, 'Account');
     const status = page.getByTestId('connection-status').last();
     assert.equal((await status.textContent()).trim(), 'Offline');
     assert.equal((await page.getByTestId('account-name').last().textContent()).trim(), name);
@@ -197,11 +197,11 @@ describe('offline', { concurrency: false }, () => {
 
     // A deep link typed while offline is served by the service worker's navigation fallback too.
     await page.goto(`${BASE_URL}/tabs/cases`);
-    await pageTitle(page, 'Cases').waitFor();
+    await waitForPage(page, 'Cases');
     assert.deepEqual(apiCallsWhileOffline, [], 'offline, the shell must not call the API');
 
     await context.setOffline(false);
-    await page.getByTestId('connection-status').last().filter({ hasText: 'Online' }).waitFor();
+    await page.getByTestId('connection-status').last().filter({ hasText: 'Online' });
     await screenshot(page, 'inspector-cases-800x1280');
   });
 
@@ -209,7 +209,7 @@ describe('offline', { concurrency: false }, () => {
     const { page } = browser;
     await page.emulateMedia({ colorScheme: 'dark' });
     await page.reload();
-    await pageTitle(page, 'Cases').waitFor();
+    await waitForPage(page, 'Cases');
     assert.equal(await page.evaluate(() => document.documentElement.classList.contains('ion-palette-dark')), true);
     await assertAccessible(page, 'the cases page, dark palette');
     await screenshot(page, 'dark-cases-800x1280');

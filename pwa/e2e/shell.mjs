@@ -11,7 +11,7 @@ export async function signIn(page, baseUrl, email, password) {
 /** Signs in and waits for the landing page, as a person would before touching the tab bar. */
 export async function signInTo(page, baseUrl, email, password, landingTitle) {
   await signIn(page, baseUrl, email, password);
-  await pageTitle(page, landingTitle).waitFor();
+  await waitForPage(page, landingTitle);
 }
 
 /** Signs out from the Account tab and waits for the sign-in page. */
@@ -19,6 +19,7 @@ export async function signOut(page) {
   await openTab(page, 'Account');
   await page.getByRole('button', { name: 'Sign out' }).click();
   await page.waitForURL(/\/signin$/);
+  await waitForPage(page, 'Sign in');
 }
 
 /** The refresh token the app keeps in IndexedDB (read the way the app stores it, not through its code). */
@@ -43,15 +44,33 @@ export async function tabLabels(page) {
   return page.locator('ion-tab-bar ion-tab-button ion-label').allTextContents();
 }
 
-/** Opens a tab by its label and waits for its page title. */
+/** Opens a tab by its label and waits for its page to be shown. */
 export async function openTab(page, label, title = label) {
   await page.locator('ion-tab-bar ion-tab-button', { hasText: label }).click();
-  await pageTitle(page, title).waitFor();
+  await waitForPage(page, title);
 }
 
-/** The visible page title (h1) with that text. */
+/** The page title (h1) with that text. */
 export function pageTitle(page, title) {
   return page.getByRole('heading', { level: 1, name: title, exact: true });
+}
+
+/**
+ * Waits until the page with that title is really on screen. Playwright's own visibility ignores
+ * opacity, and Ionic keeps an entering page at opacity 0 until its transition ends, so a page stuck
+ * mid-transition would otherwise pass as visible.
+ */
+export async function waitForPage(page, title) {
+  await pageTitle(page, title).waitFor();
+  await page.waitForFunction((text) => {
+    const heading = [...document.querySelectorAll('h1')].find((h) => h.textContent.trim() === text && h.getClientRects().length > 0);
+    if (!heading) return false;
+    for (let node = heading; node; node = node.parentElement) {
+      const style = getComputedStyle(node);
+      if (style.opacity !== '1' || style.visibility === 'hidden' || node.classList.contains('ion-page-invisible')) return false;
+    }
+    return true;
+  }, title, { timeout: 10_000 });
 }
 
 /** Waits until the service worker controls the page, so an offline reload is served from its cache. */

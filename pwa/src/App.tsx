@@ -1,7 +1,7 @@
 import { IonApp, IonRouterOutlet } from '@ionic/react';
 import { IonReactRouter } from '@ionic/react-router';
 import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
-import type { ReactNode } from 'react';
+import { useEffect, type ReactNode } from 'react';
 import { Navigate, Route } from 'react-router-dom';
 import { lazyPage } from './components/lazyPage';
 import { ApiClientProvider } from './features/api/ApiClientContext';
@@ -13,11 +13,18 @@ import type { SessionStore } from './features/session/sessionStore';
 const SignInPage = lazyPage(() => import('./pages/SignInPage'));
 const TabsLayout = lazyPage(() => import('./pages/TabsLayout'));
 
-/** Lets a usable session (online, or offline within its period) through; everything else goes to sign-in. */
+/**
+ * Lets a usable session (online, or offline within its period) through; everything else goes to
+ * sign-in. That is a full page load on purpose: it drops the previous person's tab stacks and
+ * cached server data, so the next person on a shared tablet starts clean (the shell is precached).
+ */
 function RequireSession({ children }: { children: ReactNode }) {
   const { status } = useSession();
-  if (status === 'online' || status === 'offline') return children;
-  return <Navigate to="/signin" replace />;
+  const usable = status === 'online' || status === 'offline';
+  useEffect(() => {
+    if (!usable) window.location.replace('/signin');
+  }, [usable]);
+  return usable ? children : null;
 }
 
 /** Sends "/" to the person's first tab, or to sign-in. */

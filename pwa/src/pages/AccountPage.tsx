@@ -1,7 +1,6 @@
 import { useState } from 'react';
 import { IonButton, IonIcon } from '@ionic/react';
 import { logOutOutline } from 'ionicons/icons';
-import { useNavigate } from 'react-router-dom';
 import { useTranslation } from 'react-i18next';
 import { PageShell } from '../components/PageShell';
 import { ThemeChooser } from '../components/ThemeChooser';
@@ -13,7 +12,6 @@ import { formatDateTime, formatHours } from '../i18n/format';
 /** Everyone's account and settings: who is signed in, offline period, display, language, sign-out. */
 export default function AccountPage() {
   const { t, i18n } = useTranslation();
-  const navigate = useNavigate();
   const online = useOnlineStatus();
   const { session, offlineUntil, offlineSessionHours, signOut } = useSession();
   const [signingOut, setSigningOut] = useState(false);
@@ -23,8 +21,8 @@ export default function AccountPage() {
   async function onSignOut() {
     setSigningOut(true);
     try {
+      // Clearing the session is enough: the shell's guard then sends the person to sign-in.
       await signOut();
-      navigate('/signin', { replace: true });
     } finally {
       setSigningOut(false);
     }

@@ -1,6 +1,6 @@
 import { useEffect, useRef, useState, type FormEvent } from 'react';
 import { IonButton, IonContent, IonInput, IonPage } from '@ionic/react';
-import { Navigate, useNavigate } from 'react-router-dom';
+import { useNavigate } from 'react-router-dom';
 import { useTranslation } from 'react-i18next';
 import { BrandMark } from '../components/BrandMark';
 import { ConnectionBadge } from '../components/ConnectionBadge';
@@ -22,6 +22,9 @@ export default function SignInPage() {
   const [busy, setBusy] = useState(false);
   const [sessionEnded, setSessionEnded] = useState(status === 'expired');
   const errorRef = useRef<HTMLParagraphElement>(null);
+  const sentHome = useRef(false);
+  const usable = session !== undefined && (status === 'online' || status === 'offline');
+  const home = session ? homePathForRole(session.user.role) : undefined;
 
   useEffect(() => {
     document.title = t('app.documentTitle', { page: t('signIn.title') });
@@ -38,9 +41,15 @@ export default function SignInPage() {
     if (error) errorRef.current?.focus();
   }, [error]);
 
-  if (session && (status === 'online' || status === 'offline') && !busy) {
-    return <Navigate to={homePathForRole(session.user.role)} replace />;
-  }
+  // One navigation per sign-in, whether the session was just created or already there: Ionic keeps
+  // this page mounted in its stack, and a second navigation would interrupt the tab page's entry.
+  useEffect(() => {
+    if (!usable) sentHome.current = false;
+    else if (home && !sentHome.current) {
+      sentHome.current = true;
+      navigate(home, { replace: true });
+    }
+  }, [usable, home, navigate]);
 
   async function submit(event: FormEvent) {
     event.preventDefault();
@@ -51,9 +60,8 @@ export default function SignInPage() {
     setBusy(true);
     setError(undefined);
     try {
-      const signedIn = await signIn({ email: email.trim(), password });
+      await signIn({ email: email.trim(), password });
       setPassword('');
-      navigate(homePathForRole(signedIn.user.role), { replace: true });
     } catch (caught) {
       setError(signInErrorMessage(caught, t));
     } finally {

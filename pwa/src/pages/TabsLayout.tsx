@@ -2,30 +2,41 @@ import type { ComponentType } from 'react';
 import { IonIcon, IonLabel, IonRouterOutlet, IonTabBar, IonTabButton, IonTabs } from '@ionic/react';
 import { Navigate, Route } from 'react-router-dom';
 import { useTranslation } from 'react-i18next';
-import { lazyPage } from '../components/lazyPage';
 import { TAB_ICONS } from '../components/tabIcons';
 import { homePathForRole, tabsForRole, type TabId } from '../features/navigation/roleTabs';
 import { useSession } from '../features/session/SessionProvider';
+// Tab pages are imported here, not lazily: a lazy page inside Ionic's nested tab outlet was seen
+// to stay at opacity 0 after its first entry (Ionic 9.0.4). The whole signed-in area is one chunk
+// loaded after sign-in instead, which keeps it out of the first paint all the same.
+import CasesPage from './CasesPage';
+import CapturePage from './CapturePage';
+import ReviewQueuePage from './ReviewQueuePage';
+import LibraryPage from './LibraryPage';
+import StructureCheckPage from './StructureCheckPage';
+import EscalationsPage from './EscalationsPage';
+import UsersPage from './UsersPage';
+import AccountPage from './AccountPage';
 
 /** The screens of each tab, relative to /tabs; a tab's detail routes sit under its own path. */
 const TAB_ROUTES: Readonly<Record<TabId, readonly { path: string; Page: ComponentType }[]>> = {
-  cases: [{ path: 'cases', Page: lazyPage(() => import('./CasesPage')) }],
-  capture: [{ path: 'capture', Page: lazyPage(() => import('./CapturePage')) }],
-  review: [{ path: 'review', Page: lazyPage(() => import('./ReviewQueuePage')) }],
+  cases: [{ path: 'cases', Page: CasesPage }],
+  capture: [{ path: 'capture', Page: CapturePage }],
+  review: [{ path: 'review', Page: ReviewQueuePage }],
   library: [
-    { path: 'library', Page: lazyPage(() => import('./LibraryPage')) },
-    { path: 'library/structure', Page: lazyPage(() => import('./StructureCheckPage')) },
+    { path: 'library', Page: LibraryPage },
+    { path: 'library/structure', Page: StructureCheckPage },
   ],
-  escalations: [{ path: 'escalations', Page: lazyPage(() => import('./EscalationsPage')) }],
-  users: [{ path: 'users', Page: lazyPage(() => import('./UsersPage')) }],
-  account: [{ path: 'account', Page: lazyPage(() => import('./AccountPage')) }],
+  escalations: [{ path: 'escalations', Page: EscalationsPage }],
+  users: [{ path: 'users', Page: UsersPage }],
+  account: [{ path: 'account', Page: AccountPage }],
 };
 
 /** The signed-in shell: only the tabs of the person's role, each with its own navigation stack. */
 export default function TabsLayout() {
   const { t } = useTranslation();
   const { session } = useSession();
-  if (!session) return <Navigate to="/signin" replace />;
+  // The route guard in App only renders this with a session; it can vanish for a moment on sign-out.
+  if (!session) return null;
   const role = session.user.role;
   const tabs = tabsForRole(role);
   const home = homePathForRole(role);
