@@ -67,3 +67,6 @@ export const IDENTIFY_METHOD_VERSION = '1.0.0';
 export const PR_PAIR_MIN_SEPARATION_CM1 = 12;
 export const PR_PAIR_MAX_SEPARATION_CM1 = 140;
 export const PR_PAIR_MAX_HEIGHT_RATIO = 3;
+
+/** Where the library holds a reference spectrum, band agreement becomes (1 − w)·bands + w·max(0, r). */
+export const CORRELATION_WEIGHT = 0.5;

@@ -92,7 +92,7 @@ export function identifyScan(input: IdentifyInput, options: IdentifyOptions = {}
   if (reliable) {
     const index = libraryIndexFor(library, options.analyser ?? engineAnalyser, input.technique, input.phase);
     const obs = observedPeaks(input.peaks, input.phase === 'gas');
-    const ranked = rankLibrary(index, obs, toleranceCm1);
+    const ranked = rankLibrary(index, obs, toleranceCm1, input.spectrum);
     candidates = pickListed(index, ranked);
     mixture = mixtureOf(index, ranked, obs, toleranceCm1);
     hazardSources = ranked.map((r) => index.compounds[r.index]!);

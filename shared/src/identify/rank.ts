@@ -4,7 +4,9 @@
  * band agreement (evidence against is left out, so the bound never under-estimates); then the
  * detailed scoring of the best DETAIL_POOL_SIZE only.
  */
-import { DETAIL_POOL_SIZE } from './constants.js';
+import type { Spectrum } from '../spectrum/types.js';
+import { CORRELATION_WEIGHT, DETAIL_POOL_SIZE } from './constants.js';
+import { referenceFor, spectrumCorrelation } from './correlation.js';
 import type { BandTable, LibraryIndex } from './library-index.js';
 import type { ObservedPeaks } from './observed-peaks.js';
 import { scoreCandidate, type CandidateScore } from './score-candidate.js';
@@ -90,11 +92,24 @@ function topByUpperBound(touched: readonly number[], upper: Float64Array, k: num
   return top;
 }
 
-/** Rank the library for the observed peaks, best first (ties: hazardous compounds first, then id). */
-export function rankLibrary(index: LibraryIndex, obs: ObservedPeaks, toleranceCm1: number): RankedCompound[] {
+function withCorrelation(s: CandidateScore, r: number | null): CandidateScore {
+  if (r === null) return s;
+  return { ...s, score: (1 - CORRELATION_WEIGHT) * s.score + CORRELATION_WEIGHT * Math.max(0, r), parts: { ...s.parts, spectrumCorrelation: r } };
+}
+
+/**
+ * Rank the library for the observed peaks, best first (ties: hazardous compounds first, then id).
+ * With the processed scan, candidates of the detail pool that have a reference spectrum in the
+ * library also get the full-spectrum correlation.
+ */
+export function rankLibrary(index: LibraryIndex, obs: ObservedPeaks, toleranceCm1: number, scan?: Spectrum): RankedCompound[] {
   const { touched, upper } = fastPass(index, obs, toleranceCm1);
   const pool = topByUpperBound(touched, upper, DETAIL_POOL_SIZE);
-  const ranked = pool.map((i): RankedCompound => ({ index: i, ...scoreCandidate(index.bands[i]!, obs, toleranceCm1, index.technique) }));
+  const ranked = pool.map((i): RankedCompound => {
+    const detailed = scoreCandidate(index.bands[i]!, obs, toleranceCm1, index.technique);
+    const reference = scan === undefined ? undefined : referenceFor(index.compounds[i]!.referenceSpectra, index.technique, index.phase);
+    return { index: i, ...withCorrelation(detailed, reference === undefined ? null : spectrumCorrelation(scan!, reference)) };
+  });
   const hazardous = (i: number) => (index.compounds[i]!.hazards.classifications.length > 0 ? 0 : 1);
   return ranked.sort((a, b) => b.score - a.score || hazardous(a.index) - hazardous(b.index) || index.compounds[a.index]!.id.localeCompare(index.compounds[b.index]!.id));
 }

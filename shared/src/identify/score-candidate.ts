@@ -50,6 +50,8 @@ export interface ScoreParts {
   readonly againstShare: number;
   readonly expectedBands: number;
   readonly matchedBands: number;
+  /** Pearson's r against the library's reference spectrum; null when the library holds none or no scan was given. */
+  readonly spectrumCorrelation: number | null;
 }
 
 /** A candidate's band agreement with its evidence. */
@@ -146,6 +148,7 @@ export function scoreCandidate(bands: CompoundBands, obs: ObservedPeaks, toleran
     againstShare: againstHeight / totalHeight,
     expectedBands: bands.expected.length,
     matchedBands: explained.length,
+    spectrumCorrelation: null,
   };
   return { score: bandAgreement(parts.bandsFound, parts.peaksExplained, parts.againstShare), parts, explained, missing, against };
 }

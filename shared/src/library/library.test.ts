@@ -90,6 +90,10 @@ describe('library validation rejects bad entries with a precise message', () => 
   it('an unknown H-statement', () => {
     expect(mutate('phosgene', (c) => ((c.hazards as Record<string, unknown>).hStatements = ['H999']))).toThrow(/phosgene\.hazards\.hStatements\[0\]: "H999"/);
   });
+  it('a reference spectrum whose axis does not ascend', () => {
+    const ref = { technique: 'raman', phase: 'liquid', xCm1: [100, 90, 120, 130, 140, 150, 160, 170, 180, 190], y: [0, 1, 0, 1, 0, 1, 0, 1, 0, 1], source: { ref: 'siteband-demo', basis: 'invented' } };
+    expect(mutate('toluene', (c) => (c.referenceSpectra = [ref]))).toThrow(/toluene\.referenceSpectra\[0\]\.xCm1\[1\]: must ascend/);
+  });
   it('a repeated CAS RN', () => {
     expect(mutate('ethanol', (c) => (c.cas = '67-56-1'))).toThrow(/CAS RN 67-56-1 is also/);
   });

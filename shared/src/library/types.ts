@@ -46,6 +46,16 @@ export interface Band {
   readonly source?: SourceRef;
 }
 
+/** A measured reference spectrum (baseline-corrected), for a full-spectrum correlation. */
+export interface ReferenceSpectrum {
+  readonly technique: Technique;
+  readonly phase: MatterPhase;
+  /** Ascending wavenumbers, cm⁻¹. */
+  readonly xCm1: readonly number[];
+  readonly y: readonly number[];
+  readonly source: SourceRef;
+}
+
 /** Idealised structure in XYZ format, for the symmetry engine. */
 export interface Geometry {
   readonly xyz: string;
@@ -72,6 +82,8 @@ export interface Compound {
   readonly bandsSource?: SourceRef;
   readonly bands?: readonly Band[];
   readonly hazards: CompoundHazards;
+  /** Reference spectra where the library holds them; the ranking then adds a full-spectrum correlation. */
+  readonly referenceSpectra?: readonly ReferenceSpectrum[];
   readonly notes?: readonly string[];
 }
 

@@ -5,7 +5,7 @@ import { isPictogramCode } from '../hazards/pictograms.js';
 import type { CompoundHazards, GhsClassification, PictogramCode } from '../hazards/types.js';
 import { isValidCas } from './cas.js';
 import { arr, asFields, fail, num, oneOf, optStr, source, str, type Fields } from './read-fields.js';
-import type { Band, BandIntensity, Compound, CompoundGroup, Fundamental, Geometry, MatterPhase } from './types.js';
+import type { Band, BandIntensity, Compound, CompoundGroup, Fundamental, Geometry, MatterPhase, ReferenceSpectrum } from './types.js';
 
 /** Band positions the library accepts, in cm⁻¹: the span handheld IR and Raman instruments cover. */
 export const BAND_RANGE_CM1 = { min: 50, max: 4000 } as const;
@@ -99,6 +99,28 @@ function geometry(raw: unknown, where: string, sources: ReadonlySet<string>): Ge
   return { xyz, source: source(f.o.source, `${where}.source`, sources), ...(convention !== undefined ? { planarConvention: convention } : {}) };
 }
 
+function referenceSpectrum(raw: unknown, where: string, sources: ReadonlySet<string>): ReferenceSpectrum {
+  const f = asFields(raw, where);
+  const xCm1 = arr(f, 'xCm1', true);
+  const y = arr(f, 'y', true);
+  if (xCm1.length !== y.length || xCm1.length < 10) fail(where, 'xCm1 and y must be lists of the same length, at least 10 points');
+  xCm1.forEach((x, i) => {
+    if (typeof x !== 'number' || x < BAND_RANGE_CM1.min || x > BAND_RANGE_CM1.max || (i > 0 && x <= (xCm1[i - 1] as number))) {
+      fail(`${where}.xCm1[${i}]`, `must ascend within ${BAND_RANGE_CM1.min}..${BAND_RANGE_CM1.max}`);
+    }
+  });
+  y.forEach((v, i) => {
+    if (typeof v !== 'number' || !Number.isFinite(v)) fail(`${where}.y[${i}]`, 'must be a finite number');
+  });
+  return {
+    technique: oneOf(f, 'technique', ['ir', 'raman'] as const),
+    phase: oneOf(f, 'phase', PHASES),
+    xCm1: xCm1 as number[],
+    y: y as number[],
+    source: source(f.o.source, `${where}.source`, sources),
+  };
+}
+
 /** Validate one raw compound entry; throws a TypeError naming the entry and field at fault. */
 export function validateCompound(raw: unknown, sources: ReadonlySet<string>): Compound {
   const f0 = asFields(raw, 'compound');
@@ -128,6 +150,7 @@ export function validateCompound(raw: unknown, sources: ReadonlySet<string>): Co
     return s;
   });
   const solutionOf = optStr(f, 'solutionOf');
+  const references = f.o.referenceSpectra === undefined ? undefined : arr(f, 'referenceSpectra', true).map((r, i) => referenceSpectrum(r, `${id}.referenceSpectra[${i}]`, sources));
   return {
     id,
     name: str(f, 'name'),
@@ -144,6 +167,7 @@ export function validateCompound(raw: unknown, sources: ReadonlySet<string>): Co
     ...(bandsSource !== undefined ? { bandsSource } : {}),
     ...(bands !== undefined ? { bands } : {}),
     hazards: hazards(f.o.hazards, `${id}.hazards`, sources),
+    ...(references !== undefined ? { referenceSpectra: references } : {}),
     ...(notes !== undefined ? { notes } : {}),
   };
 }
