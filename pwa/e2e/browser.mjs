@@ -11,8 +11,11 @@ const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable
 /** The repository's ignored folder for screenshots. */
 export const SCREENSHOT_DIR = join(dirname(fileURLToPath(import.meta.url)), '..', '..', '.artifacts', 'screenshots');
 
-/** Opens a fresh browser profile; close() also deletes the profile folder. */
-export async function openBrowser({ width = 1024, height = 768, colorScheme = 'light' } = {}) {
+/**
+ * Opens a fresh browser profile; close() also deletes the profile folder. Every request that leaves
+ * `origin` (a font CDN, an analytics call) is collected in `foreignRequests`.
+ */
+export async function openBrowser({ origin, width = 1024, height = 768, colorScheme = 'light' } = {}) {
   const profile = await mkdtemp(join(tmpdir(), 'siteband-e2e-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium',
@@ -24,11 +27,17 @@ export async function openBrowser({ width = 1024, height = 768, colorScheme = 'l
   });
   const page = context.pages()[0] ?? (await context.newPage());
   const pageErrors = [];
+  const foreignRequests = [];
   page.on('pageerror', (error) => pageErrors.push(error.message));
+  context.on('request', (request) => {
+    const url = request.url();
+    if (origin && !url.startsWith(`${origin}/`) && !url.startsWith('data:') && !url.startsWith('blob:')) foreignRequests.push(url);
+  });
   return {
     context,
     page,
     pageErrors,
+    foreignRequests,
     async close() {
       await context.close();
       await rm(profile, { recursive: true, force: true });

@@ -41,10 +41,23 @@ async function assertAccessible(page, where) {
 describe('Siteband PWA shell', { concurrency: false }, () => {
   let browser;
   before(async () => {
-    browser = await openBrowser();
+    browser = await openBrowser({ origin: BASE_URL });
   });
   after(async () => {
     await browser?.close();
+  });
+
+  it('loads nothing from outside the server and throws no script errors', async () => {
+    const { page, foreignRequests, pageErrors } = browser;
+    await page.goto(`${BASE_URL}/signin`);
+    await waitForPage(page, 'Sign in');
+    const fontFaces = await page.evaluate(async () => {
+      await document.fonts.ready;
+      return [...document.fonts].filter((f) => f.status === 'loaded').map((f) => f.family);
+    });
+    assert.ok(fontFaces.some((family) => family.includes('Atkinson Hyperlegible')), 'the bundled font is in use');
+    assert.deepEqual(foreignRequests, []);
+    assert.deepEqual(pageErrors, []);
   });
 
   it('shows the sign-in page without accessibility problems and refuses a wrong password', async () => {
@@ -116,13 +129,15 @@ describe('Siteband PWA shell', { concurrency: false }, () => {
     await assertAccessible(page, 'the structure check page');
     await screenshot(page, 'supervisor-structure-check');
     await signOut(page);
+    assert.deepEqual(browser.foreignRequests, [], 'no request left the server during the whole run');
+    assert.deepEqual(browser.pageErrors, [], 'no script error during the whole run');
   });
 });
 
 describe('administering users', { concurrency: false }, () => {
   let browser;
   before(async () => {
-    browser = await openBrowser();
+    browser = await openBrowser({ origin: BASE_URL });
   });
   after(async () => {
     await browser?.close();
@@ -167,7 +182,7 @@ describe('administering users', { concurrency: false }, () => {
 describe('offline', { concurrency: false }, () => {
   let browser;
   before(async () => {
-    browser = await openBrowser({ width: 800, height: 1280 });
+    browser = await openBrowser({ origin: BASE_URL, width: 800, height: 1280 });
   });
   after(async () => {
     await browser?.close();
