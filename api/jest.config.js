@@ -9,6 +9,14 @@ const ESM_PACKAGES = [
   '@tokenizer',
   'uint8array-extras',
   '@borewit',
+  // shared's spectra packages (ESM only) and their ESM dependencies.
+  'jcampconverter',
+  'convert-to-jcamp',
+  'ml-[^/]+',
+  'cheminfo-[^/]+',
+  'dynamic-typing',
+  'is-any-array',
+  'ensure-string',
 ];
 
 const swcOptions = {

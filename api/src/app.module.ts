@@ -1,10 +1,13 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { AttachmentsModule } from './attachments/attachments.module';
 import { AuthModule } from './auth/auth.module';
+import { CasesModule } from './cases/cases.module';
 import type { AppConfig } from './config/app-config';
 import { APP_CONFIG, AppConfigModule } from './config/config.module';
 import { buildDataSourceOptions } from './database/data-source-options';
 import { HealthModule } from './health/health.module';
+import { SyncModule } from './sync/sync.module';
 import { UsersModule } from './users/users.module';
 
 /** The whole API. */
@@ -23,6 +26,9 @@ import { UsersModule } from './users/users.module';
     UsersModule,
     AuthModule,
     HealthModule,
+    CasesModule,
+    SyncModule,
+    AttachmentsModule,
   ],
 })
 export class AppModule {}

@@ -2,6 +2,7 @@ import { isAbsolute, join, resolve } from 'node:path';
 import { parseDurationSeconds } from './duration';
 import { jwtSecretWeakness, readOrCreateDevJwtSecret } from './jwt-secret';
 import { REPO_ROOT } from './paths';
+import { readS3Config, type S3Config } from './s3-config';
 
 /** Where the API's database lives. */
 export interface DatabaseConfig {
@@ -35,6 +36,8 @@ export interface AppConfig {
   logLevel: LogLevel;
   /** Sign-in throttling: more than `maxFailures` failed attempts per IP and email within the window → 429. */
   signIn: { maxFailures: number; windowSeconds: number };
+  /** Object storage for attachments (photos, raw scan files). */
+  s3: S3Config;
 }
 
 export const NODE_ENVS = ['development', 'test', 'production'] as const;
@@ -56,7 +59,7 @@ type Env = Record<string, string | undefined>;
 export const DEFAULT_DEMO_PASSWORD = 'siteband-demo-2026';
 
 /** Collects problems while reading variables, so one start-up reports all of them. */
-class EnvReader {
+export class EnvReader {
   readonly problems: string[] = [];
   constructor(private readonly env: Env) {}
 
@@ -164,6 +167,7 @@ export function loadConfig(env: Env = process.env): AppConfig {
   const demoPassword = reader.string('SITEBAND_DEMO_PASSWORD', DEFAULT_DEMO_PASSWORD);
   const logLevel = reader.oneOf('LOG_LEVEL', LOG_LEVELS, nodeEnv === 'test' ? 'warn' : 'info');
   const pwaDist = resolveFromRepo(reader.string('PWA_DIST', join(REPO_ROOT, 'pwa', 'dist')));
+  const s3 = readS3Config(reader, nodeEnv);
 
   if (reader.problems.length) throw new ConfigError(reader.problems);
   return {
@@ -177,5 +181,6 @@ export function loadConfig(env: Env = process.env): AppConfig {
     dataDir,
     logLevel,
     signIn: { maxFailures: 5, windowSeconds: 60 },
+    s3,
   };
 }

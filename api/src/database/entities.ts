@@ -1,5 +1,6 @@
 import { RefreshToken } from '../auth/refresh-token.entity';
+import { SYNC_ENTITY_CLASSES } from '../sync/sync-entities';
 import { User } from '../users/user.entity';
 
 /** Every entity, listed once (no globs: the same list works from sources under Jest and from dist). */
-export const ENTITIES = [User, RefreshToken];
+export const ENTITIES = [User, RefreshToken, ...SYNC_ENTITY_CLASSES];

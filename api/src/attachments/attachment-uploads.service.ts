@@ -1,0 +1,140 @@
+import { createHash } from 'node:crypto';
+import type { Readable } from 'node:stream';
+import {
+  BadRequestException,
+  ConflictException,
+  Injectable,
+  NotFoundException,
+  PayloadTooLargeException,
+  StreamableFile,
+  UnprocessableEntityException,
+  UnsupportedMediaTypeException,
+} from '@nestjs/common';
+import { DataSource } from 'typeorm';
+import type { AuthenticatedUser } from '../auth/authenticated-user';
+import { canSeeCase } from '../cases/case-access';
+import { Case } from '../cases/case.entity';
+import { ObjectStorageService } from '../storage/object-storage.service';
+import { lockSyncCounter, takeSyncSeq } from '../sync/sync-sequence';
+import { ATTACHMENT_RULES, mediaType } from './attachment-limits';
+import { chunkKey, fileKey, stagingPrefix } from './attachment-storage-keys';
+import { Attachment } from './attachment.entity';
+import { parseContentRange } from './content-range';
+import { AttachmentStatusDto } from './dto/attachment-status.dto';
+import { readExactly } from './read-body';
+
+/** One chunk of an upload as it arrives: its headers and the request body stream. */
+export interface UploadChunk {
+  contentType: string | undefined;
+  contentRange: string | undefined;
+  body: Readable;
+}
+
+/**
+ * Resumable uploads of attachment bytes into object storage. Each chunk is kept as its own object until
+ * the last one arrives; then the file is assembled, checked against the declared SHA-256 and stored
+ * once. A chunk is all or nothing, so the resume offset is always a chunk boundary.
+ */
+@Injectable()
+export class AttachmentUploadsService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly storage: ObjectStorageService,
+  ) {}
+
+  /** The upload state, for anyone who may see the case. */
+  async status(id: string, user: AuthenticatedUser): Promise<AttachmentStatusDto> {
+    return AttachmentStatusDto.fromEntity(await this.visible(id, user));
+  }
+
+  /** Receives one chunk (or the whole file) and completes the upload when it was the last. */
+  async receive(id: string, user: AuthenticatedUser, chunk: UploadChunk): Promise<AttachmentStatusDto> {
+    const row = await this.visible(id, user);
+    const refuse = (error: Error): never => {
+      chunk.body.resume();
+      throw error;
+    };
+    if (row.uploadedAt) {
+      // A repeated last chunk whose answer was lost: the upload is already done.
+      chunk.body.resume();
+      return AttachmentStatusDto.fromEntity(row);
+    }
+    const type = mediaType(chunk.contentType);
+    if (type !== row.contentType) {
+      refuse(new UnsupportedMediaTypeException(`Attachment ${id} was declared as ${row.contentType}; this upload is "${chunk.contentType ?? ''}"`));
+    }
+    const range = parseContentRange(chunk.contentRange, row.size);
+    if ('problem' in range) return refuse(new BadRequestException(range.problem));
+    const maxBytes = ATTACHMENT_RULES[row.kind].maxBytes;
+    if (range.total > maxBytes) refuse(new PayloadTooLargeException(`${row.kind} attachments may have at most ${maxBytes} bytes; this upload declares ${range.total}`));
+    if (range.total !== row.size) refuse(new BadRequestException(`Content-Range total ${range.total} differs from the declared size ${row.size}`));
+    if (range.start !== row.receivedBytes) {
+      refuse(new ConflictException(`The upload of ${id} is at byte ${row.receivedBytes}: send the bytes from there (Content-Range: bytes ${row.receivedBytes}-…/${row.size})`));
+    }
+
+    const bytes = await readExactly(chunk.body, range.end - range.start + 1);
+    await this.storage.put(chunkKey(id, range.start), bytes, 'application/octet-stream');
+    const moved = await this.dataSource
+      .getRepository(Attachment)
+      .update({ id, receivedBytes: range.start }, { receivedBytes: range.start + bytes.length });
+    if (moved.affected !== 1) throw new ConflictException(`Another upload of ${id} moved on meanwhile: ask for its status and resume from there`);
+    row.receivedBytes = range.start + bytes.length;
+    if (row.receivedBytes === row.size) await this.complete(row);
+    return AttachmentStatusDto.fromEntity(row);
+  }
+
+  /** The verified file as a stream, for anyone who may see the case; 409 while the upload is unfinished. */
+  async content(id: string, user: AuthenticatedUser): Promise<StreamableFile> {
+    const row = await this.visible(id, user);
+    if (!row.storageKey) throw new ConflictException(`Attachment ${id} is not uploaded yet (${row.receivedBytes} of ${row.size} bytes)`);
+    const { body } = await this.storage.stream(row.storageKey);
+    return new StreamableFile(body, {
+      type: row.contentType,
+      length: row.size,
+      disposition: `attachment; filename="${row.fileName.replace(/["\r\n]/g, '_')}"`,
+    });
+  }
+
+  /** Assembles the chunks, checks the SHA-256, stores the file and marks the attachment uploaded. */
+  private async complete(row: Attachment): Promise<void> {
+    const parts: Buffer[] = [];
+    // Walk the chunk offsets rather than listing: a chunk whose database update failed is replaced by its retry.
+    for (let offset = 0; offset < row.size; ) {
+      const part = await this.storage.read(chunkKey(row.id, offset));
+      if (part.length === 0) break;
+      parts.push(part);
+      offset += part.length;
+    }
+    const file = Buffer.concat(parts);
+    const actual = createHash('sha256').update(file).digest('hex');
+    if (file.length !== row.size || actual !== row.sha256) {
+      await this.storage.deletePrefix(stagingPrefix(row.id));
+      await this.dataSource.getRepository(Attachment).update({ id: row.id }, { receivedBytes: 0 });
+      row.receivedBytes = 0;
+      throw new UnprocessableEntityException(
+        `The received file has SHA-256 ${actual}, not the declared ${row.sha256}: nothing was kept; upload it again from byte 0`,
+      );
+    }
+    const key = fileKey(row.caseId, row.id);
+    await this.storage.put(key, file, row.contentType);
+    await this.dataSource.transaction(async (manager) => {
+      const counter = await lockSyncCounter(manager);
+      // A new sequence number (not a new version) so other devices pull the upload state; edits are not in conflict with it.
+      const syncSeq = await takeSyncSeq(manager, counter);
+      row.storageKey = key;
+      row.uploadedAt = new Date();
+      await manager.update(Attachment, { id: row.id }, { storageKey: key, uploadedAt: row.uploadedAt, syncSeq });
+    });
+    await this.storage.deletePrefix(stagingPrefix(row.id));
+  }
+
+  /** The live attachment, when the user may see its case (inspectors: only their own); 404 otherwise. */
+  private async visible(id: string, user: AuthenticatedUser): Promise<Attachment> {
+    const row = await this.dataSource.getRepository(Attachment).findOneBy({ id });
+    const owner = row && (await this.dataSource.getRepository(Case).findOneBy({ id: row.caseId }));
+    if (!row || row.deletedAt || !owner || !canSeeCase(user, owner)) {
+      throw new NotFoundException(`No attachment with the id ${id} is visible to you`);
+    }
+    return row;
+  }
+}

@@ -1,0 +1,12 @@
+import { Module } from '@nestjs/common';
+import { StorageModule } from '../storage/storage.module';
+import { AttachmentUploadsService } from './attachment-uploads.service';
+import { AttachmentsController } from './attachments.controller';
+
+/** Attachment bytes in object storage. */
+@Module({
+  imports: [StorageModule],
+  controllers: [AttachmentsController],
+  providers: [AttachmentUploadsService],
+})
+export class AttachmentsModule {}

@@ -1,0 +1,44 @@
+import { writableCase } from '../cases/case-access';
+import { ChangeRejected, type SyncHandler } from '../sync/sync-handler';
+import { EscalationDataDto } from './dto/escalation-data.dto';
+import { Escalation } from './escalation.entity';
+import { Scan } from './scan.entity';
+
+/** Escalations through sync: raised once from the tablet; acknowledging and closing come with their own workflow. */
+export const escalationSyncHandler: SyncHandler<Escalation, EscalationDataDto> = {
+  entity: 'escalation',
+  target: Escalation,
+  dataClass: EscalationDataDto,
+  caseColumn: 'caseId',
+  appendOnly: true,
+
+  async authorize(ctx, _id, data, existing) {
+    const caseId = existing?.caseId ?? (data as EscalationDataDto).caseId;
+    await writableCase(ctx.manager, caseId, ctx.user);
+    if (data?.scanId) {
+      const scan = await ctx.manager.findOneBy(Scan, { id: data.scanId });
+      if (!scan || scan.caseId !== caseId) throw new ChangeRejected(`Scan ${data.scanId} is not in case ${caseId}: push it first`);
+    }
+    return caseId;
+  },
+
+  assign(ctx, row, data, { caseId }) {
+    row.caseId = caseId;
+    row.scanId = data.scanId ?? null;
+    row.raisedBy = ctx.user.id;
+    row.raisedAt = new Date(data.raisedAt);
+    row.reason = data.reason;
+    row.hazardClasses = data.hazardClasses;
+    row.status = 'raised';
+  },
+
+  toData: (row) => ({
+    caseId: row.caseId,
+    scanId: row.scanId,
+    raisedBy: row.raisedBy,
+    raisedAt: row.raisedAt.toISOString(),
+    reason: row.reason,
+    hazardClasses: row.hazardClasses,
+    status: row.status,
+  }),
+};

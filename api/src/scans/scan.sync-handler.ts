@@ -1,0 +1,88 @@
+import { Attachment } from '../attachments/attachment.entity';
+import { writableSample } from '../samples/sample-parent';
+import { ChangeRejected, type ChangeContext, type SyncHandler } from '../sync/sync-handler';
+import { ScanDataDto } from './dto/scan-data.dto';
+import { InstrumentCheck } from './instrument-check.entity';
+import { recomputeIdentification } from './recompute-identification';
+import { Scan } from './scan.entity';
+
+/** Scans through sync: linked to a sample, an instrument check of the same case, and a raw-scan attachment. */
+export const scanSyncHandler: SyncHandler<Scan, ScanDataDto> = {
+  entity: 'scan',
+  target: Scan,
+  dataClass: ScanDataDto,
+  caseColumn: 'caseId',
+  appendOnly: false,
+
+  async authorize(ctx, id, data, existing) {
+    if (existing && data && data.sampleId !== existing.sampleId) {
+      throw new ChangeRejected(`Scan ${id} belongs to sample ${existing.sampleId}; a scan cannot move to another sample`);
+    }
+    const sample = await writableSample(ctx.manager, existing?.sampleId ?? (data as ScanDataDto).sampleId, ctx.user);
+    if (data) await checkLinks(ctx, id, data, sample.caseId);
+    return sample.caseId;
+  },
+
+  assign(_ctx, row, data, { caseId }) {
+    if (data.technique === 'ir' && data.excitationNm != null) {
+      throw new ChangeRejected('excitationNm is only for Raman scans; leave it out for IR');
+    }
+    row.sampleId = data.sampleId;
+    row.caseId = caseId;
+    row.technique = data.technique;
+    row.phase = data.phase;
+    row.excitationNm = data.excitationNm ?? null;
+    row.recordedAt = new Date(data.recordedAt);
+    row.instrumentCheckId = data.instrumentCheckId ?? null;
+    row.rawAttachmentId = data.rawAttachmentId ?? null;
+    row.rawSha256 = data.rawSha256 ?? null;
+    row.parsedSummary = data.parsedSummary ?? null;
+    row.result = data.result ?? null;
+    row.inspectorAcknowledgedAt = data.inspectorAcknowledgedAt ? new Date(data.inspectorAcknowledgedAt) : null;
+    // A changed scan invalidates any earlier server recomputation; the hook fills it in when it is wired.
+    const server = recomputeIdentification(row);
+    row.serverResult = server?.result ?? null;
+    row.resultMismatch = server?.mismatch ?? null;
+    row.serverRecomputedAt = server ? new Date() : null;
+  },
+
+  toData: (row) => ({
+    sampleId: row.sampleId,
+    caseId: row.caseId,
+    technique: row.technique,
+    phase: row.phase,
+    excitationNm: row.excitationNm,
+    recordedAt: row.recordedAt.toISOString(),
+    instrumentCheckId: row.instrumentCheckId,
+    rawAttachmentId: row.rawAttachmentId,
+    rawSha256: row.rawSha256,
+    parsedSummary: row.parsedSummary,
+    result: row.result,
+    inspectorAcknowledgedAt: row.inspectorAcknowledgedAt?.toISOString() ?? null,
+    serverResult: row.serverResult,
+    resultMismatch: row.resultMismatch,
+    serverRecomputedAt: row.serverRecomputedAt?.toISOString() ?? null,
+  }),
+};
+
+/**
+ * The instrument check must be of the same case. The raw attachment may arrive after the scan (it is
+ * owned by the scan), so it is checked only when already on the server.
+ */
+async function checkLinks(ctx: ChangeContext, id: string, data: ScanDataDto, caseId: string): Promise<void> {
+  if (data.instrumentCheckId) {
+    const check = await ctx.manager.findOneBy(InstrumentCheck, { id: data.instrumentCheckId });
+    if (!check || check.caseId !== caseId) {
+      throw new ChangeRejected(`Instrument check ${data.instrumentCheckId} is not in case ${caseId}: push it first`);
+    }
+  }
+  if (data.rawAttachmentId) {
+    const raw = await ctx.manager.findOneBy(Attachment, { id: data.rawAttachmentId });
+    if (raw && (raw.ownerType !== 'scan' || raw.ownerId !== id || raw.kind !== 'raw-scan')) {
+      throw new ChangeRejected(`Attachment ${raw.id} is not a raw-scan attachment of scan ${id}`);
+    }
+    if (raw && raw.sha256 !== data.rawSha256) {
+      throw new ChangeRejected(`rawSha256 differs from the SHA-256 declared for attachment ${raw.id}`);
+    }
+  }
+}

@@ -1,0 +1,49 @@
+import type { EntityManager } from 'typeorm';
+import type { AuthenticatedUser } from '../auth/authenticated-user';
+import type { SyncedRecord } from './synced-record';
+
+/** The kinds of record a client can push and pull. */
+export const SYNC_ENTITIES = ['case', 'sample', 'handover', 'scan', 'note', 'instrumentCheck', 'escalation', 'attachment'] as const;
+export type SyncEntityName = (typeof SYNC_ENTITIES)[number];
+
+/** A change the server refuses, with the reason the client shows next to the record. */
+export class ChangeRejected extends Error {
+  constructor(reason: string) {
+    super(reason);
+    this.name = 'ChangeRejected';
+  }
+}
+
+/** What a handler may use while a change is applied: the change's own transaction and who sent it. */
+export interface ChangeContext {
+  manager: EntityManager;
+  user: AuthenticatedUser;
+}
+
+/**
+ * How sync treats one kind of record. The generic part (idempotency, versions, sequence numbers,
+ * conflicts) lives in the change applier; a handler only knows its own fields and parent links.
+ */
+export interface SyncHandler<E extends SyncedRecord = SyncedRecord, D extends object = object> {
+  entity: SyncEntityName;
+  /** The TypeORM entity class. */
+  target: new () => E;
+  /** The class-validator class for `data` of an upsert (full record, not a patch). */
+  dataClass: new () => D;
+  /** The column naming the case a row belongs to, for visibility filters (`id` for cases themselves). */
+  caseColumn: 'id' | 'caseId';
+  /** Created once, never changed or deleted through sync (e.g. hand-overs: the chain of custody is append-only). */
+  appendOnly: boolean;
+  /**
+   * Checks the write is allowed (the case is the user's and open, parents exist in that case) and
+   * returns the case id. Throws `ChangeRejected` otherwise.
+   */
+  authorize(ctx: ChangeContext, id: string, data: D | null, existing: E | null): Promise<string>;
+  /**
+   * Copies `data` onto the row; server-owned fields (case link, author, status...) are set when `isNew`.
+   * Throws `ChangeRejected` on a forbidden change.
+   */
+  assign(ctx: ChangeContext, row: E, data: D, target: { caseId: string; isNew: boolean }): void | Promise<void>;
+  /** The record's fields as clients see them (no id, version or sync fields: the envelope carries those). */
+  toData(row: E): Record<string, unknown>;
+}
