@@ -1,0 +1,71 @@
+/** Centre of mass, principal axes and sets of possibly equivalent atoms: the input to the element search. */
+import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
+import type { Atom, Structure, Vec3 } from '../types.js';
+import { atomMass } from '../../chem/isotopes.js';
+
+/** A structure moved to its centre of mass, with what the search needs to know about it. */
+export interface PreparedStructure {
+  readonly atoms: readonly Atom[];
+  /** Positions relative to the centre of mass (input axes), Å. */
+  readonly positions: readonly Vec3[];
+  readonly masses: readonly number[];
+  /** Element plus isotope: only atoms of the same kind can be exchanged by an operation. */
+  readonly kinds: readonly string[];
+  readonly centre: Vec3;
+  /** Principal moments (u·Å², ascending) and their unit axes in the input frame. */
+  readonly moments: readonly [number, number, number];
+  readonly axes: readonly [Vec3, Vec3, Vec3];
+  /** Atoms of one kind at one distance from the centre (within the tolerance), centre atoms excluded; smallest first. */
+  readonly classes: readonly (readonly number[])[];
+}
+
+/** Masses, centre of mass, inertia tensor eigen-decomposition and equivalence classes of `structure`. */
+export function prepareStructure(structure: Structure, tolerance: number): PreparedStructure {
+  const atoms = structure.atoms;
+  const masses = atoms.map((a, i) => {
+    const m = atomMass(a.element, a.isotope);
+    if (m === undefined) throw new RangeError(`atom ${i + 1}: no mass known for ${a.isotope ?? ''}${a.element}`);
+    return m;
+  });
+  const total = masses.reduce((s, m) => s + m, 0);
+  const centre = [0, 1, 2].map((k) => atoms.reduce((s, a, i) => s + masses[i] * a.position[k], 0) / total) as unknown as Vec3;
+  const positions = atoms.map((a): Vec3 => [a.position[0] - centre[0], a.position[1] - centre[1], a.position[2] - centre[2]]);
+  const kinds = atoms.map((a) => `${a.element}${a.isotope === undefined ? '' : `-${a.isotope}`}`);
+
+  const t = Matrix.zeros(3, 3);
+  positions.forEach((r, i) => {
+    const r2 = r[0] ** 2 + r[1] ** 2 + r[2] ** 2;
+    for (let p = 0; p < 3; p++) for (let q = 0; q < 3; q++) t.set(p, q, t.get(p, q) + masses[i] * ((p === q ? r2 : 0) - r[p] * r[q]));
+  });
+  const eig = new EigenvalueDecomposition(t, { assumeSymmetric: true });
+  const order = [0, 1, 2].sort((p, q) => eig.realEigenvalues[p] - eig.realEigenvalues[q]);
+  const column = (c: number): Vec3 => [eig.eigenvectorMatrix.get(0, c), eig.eigenvectorMatrix.get(1, c), eig.eigenvectorMatrix.get(2, c)];
+  const moments = order.map((c) => Math.max(0, eig.realEigenvalues[c])) as unknown as [number, number, number];
+  const axes = order.map(column) as unknown as [Vec3, Vec3, Vec3];
+
+  return { atoms, positions, masses, kinds, centre, moments, axes, classes: equivalenceClasses(positions, kinds, tolerance) };
+}
+
+function equivalenceClasses(positions: readonly Vec3[], kinds: readonly string[], tolerance: number): number[][] {
+  const radius = positions.map((p) => Math.hypot(p[0], p[1], p[2]));
+  const byKind = new Map<string, number[]>();
+  radius.forEach((r, i) => {
+    if (r < tolerance) return; // an atom at the centre is fixed by every operation
+    byKind.set(kinds[i], [...(byKind.get(kinds[i]) ?? []), i]);
+  });
+  const classes: number[][] = [];
+  for (const members of byKind.values()) {
+    members.sort((a, b) => radius[a] - radius[b]);
+    let current = [members[0]];
+    for (let k = 1; k < members.length; k++) {
+      // Symmetry-equivalent atoms share a radius up to the noise, so a gap wider than the tolerance separates sets.
+      if (radius[members[k]] - radius[members[k - 1]] > tolerance) {
+        classes.push(current);
+        current = [];
+      }
+      current.push(members[k]);
+    }
+    classes.push(current);
+  }
+  return classes.sort((a, b) => a.length - b.length);
+}
