@@ -1,13 +1,21 @@
 import { fromJSON } from 'convert-to-jcamp';
+import { isUniform } from './axis.js';
 import type { Spectrum } from './types.js';
 
 const JCAMP_Y_UNITS = { absorbance: 'ABSORBANCE', transmittance: 'TRANSMITTANCE', intensity: 'ARBITRARY UNITS' } as const;
 const CSV_Y_HEADER = { absorbance: 'Absorbance', transmittance: 'Transmittance (fraction)', intensity: 'Intensity' } as const;
 
-/** Write a scan as JCAMP-DX 4.24 text (XYDATA in DIFDUP compression when the axis is uniform). */
-export function spectrumToJcamp(spectrum: Spectrum): string {
+/**
+ * Write a scan as JCAMP-DX 4.24 text, XYDATA in DIFDUP compression (the axis must be uniform,
+ * as processScan's output is). Extra entries (e.g. the processing parameters as JSON) become
+ * private ##$ labels.
+ */
+export function spectrumToJcamp(spectrum: Spectrum, extraMeta: Readonly<Record<string, string>> = {}): string {
+  if (!isUniform(spectrum.xCm1)) {
+    throw new RangeError('JCAMP-DX XYDATA needs a uniform axis; resample the scan first (resampleUniform)');
+  }
   const raman = spectrum.technique === 'raman';
-  const meta: Record<string, string> = {};
+  const meta: Record<string, string> = { ...extraMeta };
   if (spectrum.excitationNm !== undefined) meta['LASER WAVELENGTH'] = String(spectrum.excitationNm);
   return fromJSON(
     { x: Array.from(spectrum.xCm1), y: Array.from(spectrum.y) },

@@ -31,7 +31,6 @@ export function importDelimited(text: string, options: ImportOptions, minPoints:
     }
     if (cells.length >= 2 && cells.filter((c) => c !== '').length >= 2) {
       header.splice(0, header.length, ...cells);
-      meta[`line ${i + 1}`] = cells.join(' | ');
     }
   }
   if (firstData < 0) throw new SpectrumImportError('not-numeric', 'no line with two numeric columns was found');

@@ -149,7 +149,7 @@ function excitationOf(entry: Entry): number | undefined {
 function stringMeta(entry: Entry): Record<string, string> {
   const meta: Record<string, string> = {};
   for (const [key, value] of Object.entries({ ...entry.info, ...entry.meta })) {
-    if (value !== undefined && String(value).length <= 500) meta[key] = String(value);
+    if (value !== undefined && String(value).length <= 20000) meta[key] = String(value);
   }
   return meta;
 }

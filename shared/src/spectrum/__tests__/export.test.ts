@@ -39,6 +39,15 @@ describe('export and re-import', () => {
     });
   });
 
+  it('writes the processing parameters as a private label and refuses a non-uniform axis', () => {
+    const result = processScan(raw, { technique: 'raman', phase: 'condensed' });
+    const text = spectrumToJcamp(result.spectrum, { 'SITEBAND PARAMETERS': JSON.stringify(result.parameters) });
+    const back = importSpectrum(text);
+    expect(JSON.parse(back.meta!['SITEBAND PARAMETERS'])).toEqual(JSON.parse(JSON.stringify(result.parameters)));
+    const uneven = { ...raw, xCm1: raw.xCm1.map((x, i) => x + (i === 5 ? 0.3 : 0)) };
+    expect(() => spectrumToJcamp(uneven)).toThrow(/uniform axis/);
+  });
+
   it('IR absorbance survives the JCAMP-DX round trip as absorbance', () => {
     const ir = syntheticSpectrum({ from: 600, to: 4000, step: 2, bands: [{ x: 1700, height: 0.8, fwhm: 20 }] });
     const back = importSpectrum(spectrumToJcamp(ir), { technique: 'ir' });
