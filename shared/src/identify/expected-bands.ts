@@ -78,7 +78,7 @@ export function compoundBands(
   const expected: ExpectedBand[] = [];
   const forbidden: ExpectedBand[] = [];
   if (compound.geometry !== undefined && compound.fundamentals !== undefined) {
-    const species = analyse(compound.geometry.xyz).species;
+    const species = analyse(compound.geometry.xyz, compound.geometry.planarConvention).species;
     for (const f of compound.fundamentals) {
       if (f.matchable === false) continue;
       const s = species.find((x) => x.label === f.label);

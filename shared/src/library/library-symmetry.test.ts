@@ -17,7 +17,7 @@ describe('library ↔ symmetry engine', () => {
 
   for (const c of molecules) {
     it(`${c.id}: fundamentals per species equal the engine's Γvib; intensities only where the engine allows`, () => {
-      const symmetry = engineAnalyser(c.geometry!.xyz);
+      const symmetry = engineAnalyser(c.geometry!.xyz, c.geometry!.planarConvention);
       const engine = Object.fromEntries(symmetry.species.map((s) => [s.label, s.count]));
       const listed: Record<string, number> = {};
       for (const f of c.fundamentals!) listed[f.label] = (listed[f.label] ?? 0) + 1;
@@ -42,6 +42,22 @@ describe('library ↔ symmetry engine', () => {
     expect([group('water'), group('ammonia'), group('methane'), group('sulfur-hexafluoride'), group('benzene'), group('carbon-dioxide'), group('ethylene')]).toEqual([
       'C2v', 'C3v', 'Td', 'Oh', 'D6h', 'D∞h', 'D2h',
     ]);
+  });
+
+  it('derives the group from the geometry, not from its orientation', () => {
+    const nh3 = library.compounds.find((c) => c.id === 'ammonia')!.geometry!.xyz;
+    const [count, title, ...atoms] = nh3.trim().split('\n');
+    // Rotate by 40° about x and 25° about z: the same molecule in an arbitrary frame.
+    const ax = (40 * Math.PI) / 180;
+    const az = (25 * Math.PI) / 180;
+    const turned = atoms.map((line) => {
+      const [el, ...xyz] = line.split(' ');
+      const [x, y, z] = xyz.map(Number) as [number, number, number];
+      const y1 = y * Math.cos(ax) - z * Math.sin(ax);
+      const z1 = y * Math.sin(ax) + z * Math.cos(ax);
+      return `${el} ${(x * Math.cos(az) - y1 * Math.sin(az)).toFixed(6)} ${(x * Math.sin(az) + y1 * Math.cos(az)).toFixed(6)} ${z1.toFixed(6)}`;
+    });
+    expect(engineAnalyser([count, title, ...turned].join('\n') + '\n')).toEqual(engineAnalyser(nh3));
   });
 
   it('takes IR and Raman activity from the engine: CO2 shows ν2, ν3 in IR and none of them in Raman', () => {

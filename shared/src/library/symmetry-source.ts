@@ -18,17 +18,21 @@ export interface MoleculeSymmetry {
   readonly species: readonly SpeciesActivity[];
 }
 
-/** A function from XYZ text to the molecule's point group and Γvib with activity. */
-export type SymmetryAnalyser = (xyz: string) => MoleculeSymmetry;
+/**
+ * A function from XYZ text to the molecule's point group and Γvib with activity; `convention`
+ * is the plane of a planar C2v/D2h molecule (`yz`, Mulliken 1955, when not given).
+ */
+export type SymmetryAnalyser = (xyz: string, convention?: 'yz' | 'xz') => MoleculeSymmetry;
 
-/** Wrap an analyser so each distinct geometry is analysed once. */
+/** Wrap an analyser so each distinct geometry and convention is analysed once. */
 export function cachedAnalyser(analyse: SymmetryAnalyser): SymmetryAnalyser {
   const cache = new Map<string, MoleculeSymmetry>();
-  return (xyz) => {
-    let hit = cache.get(xyz);
+  return (xyz, convention = 'yz') => {
+    const key = `${convention}\n${xyz}`;
+    let hit = cache.get(key);
     if (hit === undefined) {
-      hit = analyse(xyz);
-      cache.set(xyz, hit);
+      hit = analyse(xyz, convention);
+      cache.set(key, hit);
     }
     return hit;
   };
