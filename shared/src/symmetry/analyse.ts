@@ -10,15 +10,16 @@ import { principalAxes } from './inertia.js';
 import { deriveBonds, validateBonds, type Bond } from './bonds.js';
 import { bondPermutations, stretchCombinations, stretchRepresentation, type StretchCombinations } from './stretches.js';
 import { irrepByLabel, type Decomposition, type Representation } from './representation.js';
+import { defaultCovalentRadius, defaultMass } from './element-data.js';
 
 export interface AnalyseOptions {
   /** Å within which an operation must send every atom onto an equivalent one (default 0.05). */
   readonly tolerance?: number;
   /** Bonds listed by the structure file (0-based atom indices); otherwise derived from covalent radii. */
   readonly bonds?: readonly Bond[];
-  /** Covalent radius in Å for an element symbol; without it and without bonds, stretches are not counted. */
-  readonly covalentRadius?: (element: string) => number | undefined;
-  /** Mass of an atom in u, for principal moments (asymmetric-top band types). */
+  /** Covalent radius in Å for an element symbol (default: Cordero et al. 2008); null to skip internal coordinates. */
+  readonly covalentRadius?: ((element: string) => number | undefined) | null;
+  /** Mass of an atom in u, for principal moments (default: isotope mass or standard atomic weight). */
   readonly mass?: (atom: Atom) => number;
 }
 
@@ -83,7 +84,9 @@ export function analyseVibrations(groupName: string, atoms: readonly Atom[], opt
   const vib = g.gammaVib.decomposition;
   const internal = internalCoordinates(group, atoms, perms, vib, options);
   const top = topFromGroup(group);
-  const axes = top === 'asymmetric top' && options.mass && atoms.length > 1 ? principalAxes(atoms, options.mass).axisOf : undefined;
+  const massOf = options.mass ?? defaultMass;
+  // Without a mass for every atom the inertial axes are unknown and asymmetric-top band types stay undetermined.
+  const axes = top === 'asymmetric top' && atoms.every((a) => massOf(a) > 0) ? principalAxes(atoms, massOf).axisOf : undefined;
 
   const modes = Object.entries(vib).map(([label, count]): VibrationalMode => {
     const activity = irrepActivity(group, label);
@@ -126,7 +129,7 @@ function describeSplit(stretches: number, deformations: number): string {
   return parts.join(' + ');
 }
 
-/** Γstretch and its combinations, or null when neither bonds nor covalent radii are available. */
+/** Γstretch and its combinations, or null when bonds can be neither read nor derived. */
 function internalCoordinates(
   group: PointGroup,
   atoms: readonly Atom[],
@@ -141,7 +144,10 @@ function internalCoordinates(
     [bonds, bondSource] = [options.bonds, 'listed'];
   } else if (options.covalentRadius) {
     [bonds, bondSource] = [deriveBonds(atoms, options.covalentRadius), 'derived'];
+  } else if (options.covalentRadius === undefined && atoms.every((a) => defaultCovalentRadius(a.element) !== undefined)) {
+    [bonds, bondSource] = [deriveBonds(atoms, defaultCovalentRadius), 'derived'];
   } else {
+    // Turned off, or an element (beyond Cm) has no tabulated radius: no stretch/deformation split.
     return null;
   }
   const notes = ['Deformations are Γvib − Γstretch: bends, torsions and out-of-plane motions together, so angle redundancies in rings never arise.'];

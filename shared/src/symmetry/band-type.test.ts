@@ -58,8 +58,9 @@ describe('band types of IR fundamentals', () => {
     expect(modes.find((m) => m.label === 'B2')!.band).toMatchObject({ type: 'A-type', branches: ['P', 'Q', 'R'] });
   });
 
-  it('asymmetric top without masses says the type is undetermined', () => {
-    const modes = analyseVibrations('C2v', MOLECULES.H2O.atoms).vibrations.modes;
+  it('uses standard atomic weights by default and says "undetermined" when a mass is missing', () => {
+    expect(analyseVibrations('C2v', MOLECULES.H2O.atoms).vibrations.modes[0].band!.type).toBe('B-type');
+    const modes = analyseVibrations('C2v', MOLECULES.H2O.atoms, { mass: () => 0 }).vibrations.modes;
     expect(modes[0].band!.type).toBe('undetermined');
   });
 });

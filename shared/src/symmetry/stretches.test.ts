@@ -80,8 +80,16 @@ describe('bond stretches as internal coordinates', () => {
     expect(combos.E[0].map((x) => Math.round(x * 1e4) / 1e4)).toEqual([0.8165, -0.4082, -0.4082]);
   });
 
-  it('without bonds or radii the stretch split is null', () => {
+  it('derives bonds by default from Cordero et al. (2008) radii × 1.2: O–H bonded, H···H not', () => {
     const r = analyseVibrations('C2v', MOLECULES.H2O.atoms);
+    expect(r.internalCoordinates!.bonds).toEqual([[0, 1], [0, 2]]);
+    expect(r.internalCoordinates!.bondSource).toBe('derived');
+    const benzene = analyseVibrations('D6h', MOLECULES.benzene.atoms);
+    expect(benzene.internalCoordinates!.bonds).toHaveLength(12);
+  });
+
+  it('covalentRadius: null turns the stretch split off', () => {
+    const r = analyseVibrations('C2v', MOLECULES.H2O.atoms, { covalentRadius: null });
     expect(r.internalCoordinates).toBeNull();
     expect(r.vibrations.modes[0].stretches).toBeNull();
   });
