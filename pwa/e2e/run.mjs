@@ -170,6 +170,9 @@ describe('administering users', { concurrency: false }, () => {
     await reloaded.waitFor();
     assert.equal(await reloaded.getByLabel(`Role of ${name}`).inputValue(), 'safety_officer');
     assert.equal((await reloaded.locator('.sb-pill').textContent()).trim(), 'Deactivated');
+    await page.setViewportSize({ width: 800, height: 1280 });
+    await screenshot(page, 'admin-users-800x1280');
+    await page.setViewportSize({ width: 1024, height: 768 });
 
     // The deactivated person can no longer sign in.
     await signOut(page);

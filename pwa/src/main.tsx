@@ -3,6 +3,7 @@ import { createRoot } from 'react-dom/client';
 import { setupIonicReact } from '@ionic/react';
 import { QueryClient } from '@tanstack/react-query';
 import { registerSW } from 'virtual:pwa-register';
+import i18next from 'i18next';
 
 // Only the Ionic CSS the shell needs; the palette and layout are our own (theme/).
 import '@ionic/react/css/core.css';
@@ -47,9 +48,9 @@ async function start(): Promise<void> {
 }
 
 start().catch((error: unknown) => {
+  const message = error instanceof Error ? error.message : String(error);
   const root = document.getElementById('root');
-  if (root) {
-    root.textContent = `Siteband could not start: ${error instanceof Error ? error.message : String(error)}`;
-  }
+  // The language files may be what failed to load, so English stands in when i18next is not ready.
+  if (root) root.textContent = i18next.isInitialized ? i18next.t('app.startFailed', { message }) : `Siteband could not start: ${message}`;
   console.error(error);
 });

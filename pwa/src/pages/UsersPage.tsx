@@ -58,7 +58,6 @@ export default function UsersPage() {
               <thead>
                 <tr>
                   <th scope="col">{t('pages.users.colName')}</th>
-                  <th scope="col">{t('pages.users.colEmail')}</th>
                   <th scope="col">{t('pages.users.colRole')}</th>
                   <th scope="col">{t('pages.users.colStatus')}</th>
                   <th scope="col">{t('pages.users.colAction')}</th>

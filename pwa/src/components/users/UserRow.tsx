@@ -20,10 +20,12 @@ export function UserRow({ user, isSelf, busy, onChange }: UserRowProps) {
   return (
     <tr className={user.active ? undefined : 'sb-row--inactive'} data-testid={`user-row-${user.email}`}>
       <th scope="row">
-        {user.displayName}
-        {isSelf && <span className="sb-muted"> ({t('pages.users.you')})</span>}
+        <span className="sb-user-name">
+          {user.displayName}
+          {isSelf && <span className="sb-muted"> ({t('pages.users.you')})</span>}
+        </span>
+        <span className="sb-user-email">{user.email}</span>
       </th>
-      <td className="sb-cell--email">{user.email}</td>
       <td>
         <label htmlFor={roleId} className="sb-visually-hidden">
           {t('pages.users.roleOf', { name: user.displayName })}
