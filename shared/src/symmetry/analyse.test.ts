@@ -164,5 +164,7 @@ describe('Γ3N bookkeeping and bad input', () => {
     const r = analyseVibrations('D2h', MOLECULES.CO2.atoms);
     expect(r.linear).toBe(true);
     expect(r.vibrations.gamma).toEqual({ Ag: 1, B1u: 1, B2u: 1, B3u: 1 });
+    expect(r.top).toBe('linear');
+    expect(r.vibrations.modes.find((m) => m.label === 'B1u')!.band).toMatchObject({ type: 'parallel', branches: ['P', 'R'] });
   });
 });

@@ -83,7 +83,8 @@ export function analyseVibrations(groupName: string, atoms: readonly Atom[], opt
   const g = cartesianGammas(group, atoms, tolerance);
   const vib = g.gammaVib.decomposition;
   const internal = internalCoordinates(group, atoms, perms, vib, options);
-  const top = topFromGroup(group);
+  // A linear structure analysed in a finite subgroup (CO2 in D2h) is still a linear rotor.
+  const top = g.linear ? 'linear' : topFromGroup(group);
   const massOf = options.mass ?? defaultMass;
   // Without a mass for every atom the inertial axes are unknown and asymmetric-top band types stay undetermined.
   const axes = top === 'asymmetric top' && atoms.every((a) => massOf(a) > 0) ? principalAxes(atoms, massOf).axisOf : undefined;
@@ -101,7 +102,7 @@ export function analyseVibrations(groupName: string, atoms: readonly Atom[], opt
       stretches: nStretch,
       deformations: nStretch === null ? null : count - nStretch,
       composition: nStretch === null ? null : describeSplit(nStretch, count - nStretch),
-      band: activity.ir ? bandType(group, label, axes) : null,
+      band: activity.ir ? bandType(group, label, axes, top) : null,
     };
   });
 

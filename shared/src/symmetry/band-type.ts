@@ -45,15 +45,16 @@ export function topFromMoments(moments: readonly [number, number, number], relTo
 
 /**
  * Band type of the IR fundamental of this irrep. `inertialAxes` (asymmetric tops only) names which
- * principal axis of inertia (a: smallest moment, c: largest) each of x, y, z lies along.
+ * principal axis of inertia (a: smallest moment, c: largest) each of x, y, z lies along; `top`
+ * overrides the kind of top read from the group (a linear molecule analysed in D2h).
  */
 export function bandType(
   group: PointGroup,
   irrepLabel: string,
   inertialAxes?: Readonly<Record<CartesianComponent, 'a' | 'b' | 'c'>>,
+  top: TopKind = topFromGroup(group),
 ): BandType {
   const components = irrepByLabel(group, irrepLabel).translations;
-  const top = topFromGroup(group);
   if (components.length === 0) return { top, type: 'not IR-active', branches: [], note: 'No dipole component: no IR band.' };
   const parallel = components.includes('z');
   const perpendicular = components.includes('x') || components.includes('y');
