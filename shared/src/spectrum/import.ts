@@ -1,5 +1,6 @@
 import { importDelimited } from './import-delimited.js';
 import { SpectrumImportError } from './import-error.js';
+import { checkJcampExpansion } from './jcamp-expansion.js';
 import { importJcampBlocks, pickJcampBlock, type JcampImport } from './import-jcamp.js';
 import { DEFAULT_MAX_IMPORT_BYTES, DEFAULT_MIN_POINTS, type ImportOptions } from './import-options.js';
 import type { Spectrum } from './types.js';
@@ -12,13 +13,17 @@ const JCAMP_NAME = /\.(jdx|dx|jcamp|jcm)$/i;
  */
 export function importSpectrum(input: string | Uint8Array | ArrayBuffer, options: ImportOptions = {}): Spectrum {
   const text = prepareText(input, options);
-  if (isJcamp(text, options.fileName)) return pickJcampBlock(guard(() => importJcampBlocks(text, options, minPointsOf(options))), options).spectrum;
+  if (isJcamp(text, options.fileName)) return pickJcampBlock(readJcamp(text, options), options).spectrum;
   return guard(() => importDelimited(text, options, minPointsOf(options)));
 }
 
 /** Import every spectrum block of a JCAMP-DX file (multi-block and LINK files), with the refused ones and why. */
 export function importJcampAll(input: string | Uint8Array | ArrayBuffer, options: ImportOptions = {}): JcampImport {
-  const text = prepareText(input, options);
+  return readJcamp(prepareText(input, options), options);
+}
+
+function readJcamp(text: string, options: ImportOptions): JcampImport {
+  checkJcampExpansion(text);
   return guard(() => importJcampBlocks(text, options, minPointsOf(options)));
 }
 

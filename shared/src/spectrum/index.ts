@@ -3,6 +3,7 @@ export * from './types.js';
 export { SpectrumImportError, type SpectrumImportErrorCode, type SpectrumImportErrorLocation } from './import-error.js';
 export { importSpectrum, importJcampAll } from './import.js';
 export type { JcampBlock, JcampImport } from './import-jcamp.js';
+export { checkJcampExpansion, MAX_JCAMP_POINTS } from './jcamp-expansion.js';
 export { DEFAULT_MAX_IMPORT_BYTES, DEFAULT_MIN_POINTS, type ImportOptions } from './import-options.js';
 export {
   nmToCm1,

@@ -163,6 +163,12 @@ describe('JCAMP-DX', () => {
     expectImportError(() => importSpectrum(lines.join('\n'), { block: 1 }), 'not-numeric', /declares 1501 points/);
   });
 
+  it('refuses a tiny file whose DUP counts would expand to millions of points, before decoding it', () => {
+    const text = fromJSON({ x, y }, { info, xyEncoding: 'DIFDUP' }).replace(/##XYDATA=\(X\+\+\(Y\.\.Y\)\)\n(\S+)/, '##XYDATA=(X++(Y..Y))\n850@J1S99999999');
+    const e = expectImportError(() => importSpectrum(text), 'too-large', /DUP/);
+    expect(e.line).toBeGreaterThan(10);
+  });
+
   it('refuses unknown JCAMP-DX units with the label named', () => {
     const text = fromJSON({ x, y }, { info: { ...info, yUnits: 'KUBELKA-MUNK' }, xyEncoding: 'DIF' });
     const e = expectImportError(() => importSpectrum(text), 'unknown-units');
