@@ -165,6 +165,7 @@ describe('Γ3N bookkeeping and bad input', () => {
     expect(r.linear).toBe(true);
     expect(r.vibrations.gamma).toEqual({ Ag: 1, B1u: 1, B2u: 1, B3u: 1 });
     expect(r.top).toBe('linear');
+    expect(analyseVibrations('D∞h', MOLECULES.CO2.atoms).vibrations.notes.join(' ')).toMatch(/model group D13d/);
     expect(r.vibrations.modes.find((m) => m.label === 'B1u')!.band).toMatchObject({ type: 'parallel', branches: ['P', 'R'] });
   });
 });

@@ -106,6 +106,7 @@ export function analyseVibrations(groupName: string, atoms: readonly Atom[], opt
     };
   });
 
+  const counts = activityCounts(group, vib);
   return {
     pointGroup: group.name,
     atoms: atoms.length,
@@ -116,10 +117,18 @@ export function analyseVibrations(groupName: string, atoms: readonly Atom[], opt
     gammaTrans: g.gammaTrans,
     gammaRot: g.gammaRot,
     gammaVib: g.gammaVib,
-    vibrations: { ...activityCounts(group, vib), gamma: vib, modes },
+    vibrations: { ...counts, notes: [...counts.notes, ...linearNote(group)], gamma: vib, modes },
     internalCoordinates: internal,
     cautions: CAUTIONS,
   };
+}
+
+/** For C∞v and D∞h: say that the class columns are those of the finite model group. */
+function linearNote(group: PointGroup): string[] {
+  if (!group.linear) return [];
+  return [
+    `${group.name} is computed on its finite model group ${group.linear.modelGroup}: the class columns are the model's, the labels those of ${group.name} (exact up to |Λ| = ${group.linear.maxLambda}).`,
+  ];
 }
 
 /** `2 stretches + 1 deformation`; a species with neither cannot occur (count ≥ 1). */
