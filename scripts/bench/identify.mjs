@@ -5,7 +5,17 @@
 // stage to a plain pass over the library's band arrays measured in the same run.
 import { fileURLToPath } from 'node:url';
 import { engineAnalyser, loadLibrary } from '../../shared/dist/library/index.js';
-import { buildLibraryIndex, compoundBands, findMixture, identifyScan, observedPeaks, rankLibrary, sumBandPositions } from '../../shared/dist/identify/index.js';
+import {
+  buildLibraryIndex,
+  compoundBands,
+  findMixture,
+  identifyScan,
+  MIXTURE_MIN_CANDIDATE_SCORE,
+  MIXTURE_POOL_SIZE,
+  observedPeaks,
+  rankLibrary,
+  sumBandPositions,
+} from '../../shared/dist/identify/index.js';
 import { processScan } from '../../shared/dist/spectrum/index.js';
 
 const POINTS = 4096;
@@ -75,11 +85,13 @@ export function runIdentifyBench({ runs = 51, technique = 'raman', compoundId = 
   const processed = median(() => processScan(scan, { technique, phase: 'condensed' }), runs);
   const obs = observedPeaks(processed.out.peaks);
   const ranking = median(() => rankLibrary(index, obs, 10), runs);
-  const pool = ranking.out.slice(0, 6).map((r) => index.bands[r.index]);
+  const pool = ranking.out.filter((r) => r.score >= MIXTURE_MIN_CANDIDATE_SCORE).slice(0, MIXTURE_POOL_SIZE).map((r) => index.bands[r.index]);
   const mixture = median(() => findMixture(pool, obs, 10), runs);
   const plain = median(() => sumBandPositions(index), runs);
   const whole = median(() => identifyScan({ technique, phase: 'condensed', peaks: processed.out.peaks }, { library }), runs);
   return {
+    technique,
+    compound: compoundId,
     entries: library.compounds.length,
     bandPositions: index.sharp.positionCm1.length + index.broad.positionCm1.length,
     points: POINTS,
@@ -97,6 +109,9 @@ export function runIdentifyBench({ runs = 51, technique = 'raman', compoundId = 
 }
 
 if (process.argv[1] && fileURLToPath(import.meta.url) === process.argv[1]) {
-  const r = runIdentifyBench();
-  for (const [k, v] of Object.entries(r)) console.log(`${k.padEnd(24)} ${typeof v === 'number' && !Number.isInteger(v) ? v.toFixed(3) : v}`);
+  for (const scenario of [{ technique: 'raman', compoundId: 'toluene' }, { technique: 'ir', compoundId: 'paracetamol' }]) {
+    const r = runIdentifyBench(scenario);
+    for (const [k, v] of Object.entries(r)) console.log(`${k.padEnd(24)} ${typeof v === 'number' && !Number.isInteger(v) ? v.toFixed(3) : v}`);
+    console.log('');
+  }
 }

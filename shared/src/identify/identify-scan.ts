@@ -63,6 +63,9 @@ function pickListed(index: LibraryIndex, ranked: readonly RankedCompound[]): Can
 }
 
 function mixtureOf(index: LibraryIndex, ranked: readonly RankedCompound[], obs: ReturnType<typeof observedPeaks>, tol: number): Mixture | null {
+  // A mixture must explain MIXTURE_MIN_GAIN more than the best single compound: when that one
+  // already explains nearly all observed peak height, there is nothing left to gain.
+  if (ranked.length === 0 || ranked[0]!.parts.peaksExplained > 1 - MIXTURE_MIN_GAIN) return null;
   const pool = ranked.filter((r) => r.score >= MIXTURE_MIN_CANDIDATE_SCORE).slice(0, MIXTURE_POOL_SIZE);
   const found = findMixture(pool.map((r) => index.bands[r.index]!), obs, tol);
   if (found === null) return null;

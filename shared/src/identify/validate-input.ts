@@ -23,6 +23,10 @@ export function validateIdentifyInput(input: IdentifyInput): void {
     }
   }
   if (input.quality !== undefined && typeof input.quality.reliable !== 'boolean') throw new TypeError('quality.reliable must be true or false');
+  const s = input.spectrum;
+  if (s !== undefined && (s === null || typeof s !== 'object' || s.xCm1?.length === undefined || s.xCm1.length !== s.y?.length)) {
+    throw new TypeError('spectrum must hold xCm1 and y of the same length');
+  }
 }
 
 /** The match tolerance: the caller's, else the phase default, widened to the resolution if coarser. */

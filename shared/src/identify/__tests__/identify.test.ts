@@ -125,6 +125,7 @@ describe('bad input gets a clear error', () => {
     expect(() => identifyScan({ ...ok, peaks: peaks([Number.NaN, 1]) })).toThrow(/peaks\[0\]\.x must be a positive wavenumber/);
     expect(() => identifyScan({ ...ok, peaks: peaks([1000, -1]) })).toThrow(/peaks\[0\]\.height must be a finite number ≥ 0/);
     expect(() => identifyScan({ ...ok, toleranceCm1: 0 })).toThrow(/toleranceCm1 must be a number in \(0, 50\]/);
+    expect(() => identifyScan({ ...ok, spectrum: { xCm1: new Float64Array(3), y: new Float64Array(2), ordinate: 'absorbance' } })).toThrow(/spectrum must hold xCm1 and y of the same length/);
   });
   it('leaves the input untouched', () => {
     const input = { ...ok, peaks: peaks([1715, 0.5], [1363, 1]) };
