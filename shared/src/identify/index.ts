@@ -11,3 +11,4 @@ export { findMixture, type MixtureFit } from './mixture.js';
 export { MAX_TOLERANCE_CM1 } from './validate-input.js';
 export { identifySpectrum, type IdentifySpectrumOptions } from './identify-spectrum.js';
 export { referenceFor, spectrumCorrelation, MIN_CORRELATION_POINTS } from './correlation.js';
+export { warmUpIdentification } from './warm-up.js';
