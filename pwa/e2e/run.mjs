@@ -4,7 +4,19 @@ import assert from 'node:assert/strict';
 import { after, before, describe, it } from 'node:test';
 import { blockingViolations } from './axe.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
-import { openTab, pageTitle, signIn, waitForPage, signInTo, signOut, storedRefreshToken, tabLabels, waitForServiceWorker } from './shell.mjs';
+import {
+  ageStoredSession,
+  openTab,
+  pageTitle,
+  signIn,
+  signInTo,
+  signOut,
+  storedRefreshToken,
+  tabLabels,
+  waitForNoStoredSession,
+  waitForPage,
+  waitForServiceWorker,
+} from './shell.mjs';
 
 const BASE_URL = (process.env.BASE_URL || '').replace(/\/$/, '');
 const PASSWORD = process.env.SITEBAND_DEMO_PASSWORD || 'siteband-demo-2026';
@@ -234,5 +246,29 @@ describe('offline', { concurrency: false }, () => {
     await openTab(page, 'Account');
     await assertAccessible(page, 'the account page, dark palette');
     await screenshot(page, 'dark-account-800x1280');
+  });
+
+  it('asks for a new sign-in once the offline period has run out, and revokes the old session when back online', async () => {
+    const { page, context } = browser;
+    await page.emulateMedia({ colorScheme: 'light' });
+    const oldRefreshToken = await storedRefreshToken(page);
+    assert.ok(oldRefreshToken, 'still signed in from the offline test');
+    // Ten years back: past any offline period the build may be configured with.
+    await ageStoredSession(page, 10 * 365 * 24 * 3_600_000);
+
+    await context.setOffline(true);
+    await page.reload();
+    await waitForPage(page, 'Sign in');
+    assert.match(page.url(), /\/signin$/);
+    const notice = (await page.getByText('Your offline session has ended').textContent()).trim();
+    assert.match(notice, /connect to the network to sign in again/);
+    assert.equal(await page.locator('ion-tab-bar').count(), 0);
+    await screenshot(page, 'offline-session-ended-800x1280');
+
+    await context.setOffline(false);
+    await waitForNoStoredSession(page);
+    assert.equal(await refreshStatus(oldRefreshToken), 401, 'the ended session was revoked on the server');
+
+    await signInTo(page, BASE_URL, 'inspector@demo.test', PASSWORD, 'Cases');
   });
 });

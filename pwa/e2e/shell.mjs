@@ -22,19 +22,61 @@ export async function signOut(page) {
   await waitForPage(page, 'Sign in');
 }
 
-/** The refresh token the app keeps in IndexedDB (read the way the app stores it, not through its code). */
-export function storedRefreshToken(page) {
+/** Runs inside the page: the app's session row read straight from IndexedDB, not through the app's code. */
+function readSessionRow() {
+  return new Promise((resolve, reject) => {
+    const open = indexedDB.open('siteband');
+    open.onerror = () => reject(open.error);
+    open.onsuccess = () => {
+      const get = open.result.transaction('session').objectStore('session').get('current');
+      get.onsuccess = () => {
+        open.result.close();
+        resolve(get.result);
+      };
+      get.onerror = () => reject(get.error);
+    };
+  });
+}
+
+/** The session row the app keeps in IndexedDB. */
+export function storedSession(page) {
+  return page.evaluate(readSessionRow);
+}
+
+/** Waits until the app has removed its stored session (up to 10 s). */
+export async function waitForNoStoredSession(page) {
+  for (let attempt = 0; attempt < 100; attempt += 1) {
+    if ((await storedSession(page)) === undefined) return;
+    await page.waitForTimeout(100);
+  }
+  throw new Error('The stored session was still there after 10 s');
+}
+
+/** The refresh token of the stored session, if any. */
+export async function storedRefreshToken(page) {
+  return (await storedSession(page))?.refreshToken;
+}
+
+/** Moves the time the server last confirmed the stored session back by `ms`, as if the tablet had been away. */
+export function ageStoredSession(page, ms) {
   return page.evaluate(
-    () =>
+    (age) =>
       new Promise((resolve, reject) => {
         const open = indexedDB.open('siteband');
         open.onerror = () => reject(open.error);
         open.onsuccess = () => {
-          const get = open.result.transaction('session').objectStore('session').get('current');
-          get.onsuccess = () => resolve(get.result?.refreshToken);
-          get.onerror = () => reject(get.error);
+          const tx = open.result.transaction('session', 'readwrite');
+          const table = tx.objectStore('session');
+          const get = table.get('current');
+          get.onsuccess = () => table.put({ ...get.result, confirmedAt: get.result.confirmedAt - age });
+          tx.oncomplete = () => {
+            open.result.close();
+            resolve();
+          };
+          tx.onerror = () => reject(tx.error);
         };
       }),
+    ms,
   );
 }
 
