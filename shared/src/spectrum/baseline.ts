@@ -21,12 +21,12 @@ export interface BaselineOptions {
 }
 
 /**
- * Baseline defaults per technique, chosen on synthetic scans: IR bands are broad (20–30 cm⁻¹)
- * on gentle slopes, so a stiffer baseline; Raman bands are narrow on fluorescence up to ~100
- * times taller than the bands, so the baseline must bend more.
+ * Baseline defaults per technique, chosen on synthetic scans: IR has broad bands (O–H stretches
+ * 100–250 cm⁻¹ wide keep ≥ 85 % of their height) on gentle slopes, so a stiff baseline; Raman
+ * bands are narrow on fluorescence up to ~100 times taller than the bands, so it must bend more.
  */
 export const DEFAULT_BASELINE = {
-  ir: { method: 'arpls', lambda: 1e6, maxIterations: 50, tolerance: 0.001 },
+  ir: { method: 'arpls', lambda: 1e7, maxIterations: 50, tolerance: 0.001 },
   raman: { method: 'arpls', lambda: 1e4, maxIterations: 50, tolerance: 0.001 },
 } as const satisfies Record<string, Required<BaselineOptions>>;
 

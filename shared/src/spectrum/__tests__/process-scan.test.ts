@@ -89,6 +89,13 @@ describe('processScan, IR', () => {
     expect(result.quality.reliable).toBe(true);
   });
 
+  it('keeps most of a broad O–H-like band (FWHM 250 cm⁻¹) through the baseline', () => {
+    const broad = syntheticSpectrum({ from: 600, to: 4000, step: 1, bands: [...bands, { x: 3350, height: 0.5, fwhm: 250 }], noise: 0.002, background: (x) => 0.05 + 2e-5 * x, seed: 5 });
+    const peak = processScan(broad, { technique: 'ir', phase: 'condensed' }).peaks.find((p) => Math.abs(p.x - 3350) < 10)!;
+    expect(peak.height).toBeGreaterThan(0.85 * 0.5);
+    expect(peak.widthCm1).toBeGreaterThan(200);
+  });
+
   it('sets atmospheric lines and ATR-diamond bands apart and applies the ATR correction', () => {
     const extra = [
       { x: 2349, height: 0.3, fwhm: 12 },
