@@ -7,6 +7,7 @@ import type { AppConfig } from './config/app-config';
 import { APP_CONFIG, AppConfigModule } from './config/config.module';
 import { buildDataSourceOptions } from './database/data-source-options';
 import { HealthModule } from './health/health.module';
+import { LibraryModule } from './library/library.module';
 import { SyncModule } from './sync/sync.module';
 import { UsersModule } from './users/users.module';
 
@@ -29,6 +30,7 @@ import { UsersModule } from './users/users.module';
     CasesModule,
     SyncModule,
     AttachmentsModule,
+    LibraryModule,
   ],
 })
 export class AppModule {}
