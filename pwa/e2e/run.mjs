@@ -246,6 +246,16 @@ describe('offline', { concurrency: false }, () => {
     await openTab(page, 'Account');
     await assertAccessible(page, 'the account page, dark palette');
     await screenshot(page, 'dark-account-800x1280');
+
+    // The Account page's choice overrides the tablet's setting and survives a reload.
+    const isDark = () => page.evaluate(() => document.documentElement.classList.contains('ion-palette-dark'));
+    await page.getByLabel('Light', { exact: true }).check();
+    assert.equal(await isDark(), false);
+    await page.reload();
+    await waitForPage(page, 'Account');
+    assert.equal(await isDark(), false, 'the light choice is remembered');
+    await page.getByLabel('Follow the tablet').check();
+    assert.equal(await isDark(), true);
   });
 
   it('asks for a new sign-in once the offline period has run out, and revokes the old session when back online', async () => {
