@@ -3,12 +3,12 @@ import { K_OVER_HC_CM1_PER_K } from './constants.js';
 /** Shape of the molecule's rotor and the band's transition-moment direction. */
 export type RotorKind = 'linear' | 'symmetric-top';
 /** Parallel (ΔK = 0; Σ–Σ for linear) or perpendicular (ΔK = ±1; Π–Σ for linear) band. */
-export type BandType = 'parallel' | 'perpendicular';
+export type ContourBandType = 'parallel' | 'perpendicular';
 
 /** Molecular parameters of a rotational band, all wavenumbers in cm⁻¹. */
 export interface RotorBand {
   readonly rotor: RotorKind;
-  readonly band: BandType;
+  readonly band: ContourBandType;
   /** Band centre ν0 (for perpendicular linear bands the constant l² term is absorbed here). */
   readonly bandOriginCm1: number;
   /** Lower-state rotational constant B″. */
@@ -88,7 +88,7 @@ export function rotationalLines(band: RotorBand, temperatureK: number): Rotation
 
 // Hönl–London factors of a symmetric top (linear molecules are the K = 0 case); relative
 // values within one band type (Herzberg 1945, from memory).
-function honlLondon(branch: 'P' | 'Q' | 'R', j: number, k: number, dk: number, type: BandType): number {
+function honlLondon(branch: 'P' | 'Q' | 'R', j: number, k: number, dk: number, type: ContourBandType): number {
   if (type === 'parallel') {
     if (branch === 'R') return ((j + 1) ** 2 - k * k) / (j + 1);
     if (branch === 'P') return j === 0 ? 0 : (j * j - k * k) / j;
