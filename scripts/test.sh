@@ -43,6 +43,7 @@ browser_e2e() {
 
 suite "shared unit tests (Vitest)" npm test -w shared
 suite "pwa unit tests (Vitest)" npm test -w pwa
+suite "command-line contract tests (node:test)" node --test scripts/cli/
 suite "api unit tests (Jest)" npm test -w api
 suite "api e2e tests (Jest + supertest, MariaDB)" npm run test:e2e -w api
 suite "browser e2e tests (playwright-core, Chromium)" browser_e2e

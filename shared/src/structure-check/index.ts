@@ -1,0 +1,2 @@
+/** The structure check: parse, detect the point group, reduce Γvib, report activity. */
+export { checkStructure, hillFormula, type StructureCheck, type StructureCheckElement, type StructureCheckOptions } from './check-structure.js';
