@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { atrCorrection } from '../atr.js';
-import { estimateBaseline } from '../baseline.js';
+import { DEFAULT_BASELINE, estimateBaseline } from '../baseline.js';
+import { blockMeans, expandBlocks } from '../decimate.js';
 import { interferenceRegions, separateFlaggedPeaks } from '../interferences.js';
 import { pickPeaks } from '../peaks.js';
 import { detectSaturation } from '../saturation.js';
@@ -50,7 +51,7 @@ describe('atrCorrection', () => {
 });
 
 describe('estimateBaseline', () => {
-  it('removes a fluorescence background ~80× taller than the bands (Raman default, arPLS)', () => {
+  it('removes a fluorescence background ~80× taller than the bands (Raman default, arPLS, fitted on a 4× coarser grid)', () => {
     const bands = [
       { x: 620, height: 100, fwhm: 8 },
       { x: 1001, height: 600, fwhm: 6 },
@@ -58,7 +59,7 @@ describe('estimateBaseline', () => {
     ];
     const background = (x: number) => 50000 * Math.exp(-(((x - 1500) / 1400) ** 2)) + 4500 * (x / 3300) + 10000 * Math.exp(-(((x - 600) / 300) ** 2));
     const s = syntheticSpectrum({ from: 200, to: 3300, step: 1, bands, noise: 5, technique: 'raman', background });
-    const { corrected } = estimateBaseline(s.xCm1, s.y, 1, { method: 'arpls', lambda: 1e4, maxIterations: 100, tolerance: 0.001 });
+    const { corrected } = estimateBaseline(s.xCm1, s.y, 1, { ...DEFAULT_BASELINE.raman, maxPoints: 1024 });
     for (const b of bands) expect(Math.abs(corrected[b.x - 200] - b.height)).toBeLessThan(0.1 * b.height);
     // Away from bands the corrected scan sits at zero within a few noise σ.
     expect(Math.abs(corrected[2500 - 200])).toBeLessThan(40);
@@ -66,9 +67,21 @@ describe('estimateBaseline', () => {
 
   it('keeps both methods selectable and rejects unknown ones', () => {
     const s = syntheticSpectrum({ from: 400, to: 4000, step: 2, bands: [{ x: 1700, height: 0.8, fwhm: 20 }], background: (x) => 0.2 + 0.00005 * x });
-    const viaPackage = estimateBaseline(s.xCm1, s.y, 2, { method: 'airpls', lambda: 1e5, maxIterations: 100, tolerance: 0.001 });
-    expect(viaPackage.corrected.length).toBe(s.y.length);
-    expect(() => estimateBaseline(s.xCm1, s.y, 2, { method: 'x' as never, lambda: 1, maxIterations: 1, tolerance: 1 })).toThrow(/method/);
+    const viaPackage = estimateBaseline(s.xCm1, s.y, 2, { ...DEFAULT_BASELINE.ir, method: 'airpls', lambda: 1e5 });
+    viaPackage.corrected.forEach((v, i) => expect(v + viaPackage.baseline[i]).toBeCloseTo(s.y[i], 12));
+    expect(Math.abs(viaPackage.corrected[650] - 0.8)).toBeLessThan(0.1);
+    expect(() => estimateBaseline(s.xCm1, s.y, 2, { ...DEFAULT_BASELINE.ir, method: 'x' as never })).toThrow(/method/);
+  });
+});
+
+describe('blockMeans and expandBlocks', () => {
+  it('average blocks and bring a straight line back exactly, ends included', () => {
+    const y = Array.from({ length: 103 }, (_, i) => 3 * i + 2);
+    const blocks = blockMeans(y, 4);
+    expect(blocks.length).toBe(26);
+    expect(blocks[0]).toBe((2 + 5 + 8 + 11) / 4);
+    expect(blocks[25]).toBe((3 * 100 + 2 + 3 * 101 + 2 + 3 * 102 + 2) / 3);
+    expandBlocks(blocks, 4, 103).forEach((v, i) => expect(v).toBeCloseTo(y[i], 9));
   });
 });
 
