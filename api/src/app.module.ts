@@ -7,6 +7,7 @@ import type { AppConfig } from './config/app-config';
 import { APP_CONFIG, AppConfigModule } from './config/config.module';
 import { buildDataSourceOptions } from './database/data-source-options';
 import { HealthModule } from './health/health.module';
+import { IdentifyModule } from './identify/identify.module';
 import { LibraryModule } from './library/library.module';
 import { SyncModule } from './sync/sync.module';
 import { UsersModule } from './users/users.module';
@@ -31,6 +32,7 @@ import { UsersModule } from './users/users.module';
     SyncModule,
     AttachmentsModule,
     LibraryModule,
+    IdentifyModule,
   ],
 })
 export class AppModule {}

@@ -62,6 +62,15 @@ describe('delimited text', () => {
     expectImportError(() => importSpectrum(text, { technique: 'raman' }), 'missing-excitation', /excitation wavelength/);
   });
 
+  it('computes Raman shifts from absolute wavenumbers of the scattered light', () => {
+    const text = `Absolute wavenumber (cm-1),Counts\n${rows(20, (i) => `${11700 + i * 10},${100 + i}`)}`;
+    const s = importSpectrum(text, { technique: 'raman', excitationNm: 785 });
+    // Stokes light at lower absolute wavenumber has the larger shift, so the order flips.
+    expect(s.xCm1[0]).toBeCloseTo(1e7 / 785 - 11890, 9);
+    expect(s.xCm1[19]).toBeCloseTo(1e7 / 785 - 11700, 9);
+    expect(s.y[19]).toBe(100);
+  });
+
   it('names the line and column of a bad number', () => {
     const text = `Wavenumber (cm-1),Absorbance\n${rows(20, (i) => `${1000 + i},0.1`)}\n1020,abc\n`;
     const e = expectImportError(() => importSpectrum(text), 'not-numeric', /abc/);
