@@ -33,7 +33,10 @@ export function readExactly(body: Readable, expected: number): Promise<Buffer> {
       if (received < expected) reject(new BadRequestException(`The body has ${received} bytes; the range says ${expected}: nothing was kept`));
       else resolve(Buffer.concat(chunks, received));
     });
-    body.once('aborted', () => fail(new BadRequestException('The upload was interrupted: nothing of this chunk was kept')));
-    body.once('error', (error) => fail(error));
+    const interrupted = () => fail(new BadRequestException('The upload was interrupted: nothing of this chunk was kept'));
+    body.once('aborted', interrupted);
+    body.once('error', interrupted);
+    // A connection that closes without 'end' is an interruption too (whichever of these Node reports).
+    body.once('close', interrupted);
   });
 }

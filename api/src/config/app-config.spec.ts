@@ -70,7 +70,8 @@ describe('loadConfig', () => {
     });
 
     it('starts with a strong secret and never writes a secret file', () => {
-      expect(loadConfig(env({ NODE_ENV: 'production', JWT_SECRET: STRONG })).jwt.secret).toBe(STRONG);
+      const production = { NODE_ENV: 'production', JWT_SECRET: STRONG, S3_ACCESS_KEY_ID: 'AKIAEXAMPLEONLY', S3_SECRET_ACCESS_KEY: 'not-the-fake-secret' };
+      expect(loadConfig(env(production)).jwt.secret).toBe(STRONG);
       expect(() => statSync(join(dataDir, 'jwt-secret'))).toThrow();
     });
   });

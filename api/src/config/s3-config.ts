@@ -38,7 +38,7 @@ export function readS3Config(reader: EnvReader, nodeEnv: NodeEnv): S3Config {
   if (production) {
     if (!accessKeyId || !secretAccessKey) reader.problems.push('S3_ACCESS_KEY_ID and S3_SECRET_ACCESS_KEY are required in production');
     else if (accessKeyId === S3_FAKE_CREDENTIAL || secretAccessKey === S3_FAKE_CREDENTIAL) {
-      reader.problems.push('S3_ACCESS_KEY_ID / S3_SECRET_ACCESS_KEY may not be the local fake\'s credentials in production');
+      reader.problems.push("S3_ACCESS_KEY_ID / S3_SECRET_ACCESS_KEY may not be the local fake's credentials in production");
     }
   }
   return { endpoint: endpoint?.replace(/\/$/, ''), bucket, region, accessKeyId, secretAccessKey };

@@ -1,0 +1,254 @@
+import { randomBytes, randomUUID } from 'node:crypto';
+import { GetObjectCommand } from '@aws-sdk/client-s3';
+import { createS3Client } from '../src/storage/object-storage.service';
+import { demo, pullAll, push, remove, sha256, upsert, uploadWhole } from './support/field-records';
+import { startS3Fake, type S3Fake } from './support/s3-fake';
+import { DEMO, signIn, startTestApp, type TestApp } from './support/test-app';
+
+describe('Sync push and pull (e2e, MariaDB + S3 fake)', () => {
+  let s3: S3Fake;
+  let t: TestApp;
+  let inspector: string;
+  let otherInspector: string;
+  let supervisor: string;
+  let safety: string;
+
+  beforeAll(async () => {
+    s3 = await startS3Fake();
+    t = await startTestApp({ env: s3.env });
+    inspector = (await signIn(t, DEMO.inspector)).accessToken;
+    supervisor = (await signIn(t, DEMO.supervisor)).accessToken;
+    safety = (await signIn(t, DEMO.safety_officer)).accessToken;
+    const admin = (await signIn(t, DEMO.admin)).accessToken;
+    await t
+      .http()
+      .post('/api/users')
+      .set('Authorization', `Bearer ${admin}`)
+      .send({ email: 'second.inspector@demo.test', displayName: 'Second Inspector', role: 'inspector', password: 'second-inspector-pw' })
+      .expect(201);
+    otherInspector = (await signIn(t, 'second.inspector@demo.test', 'second-inspector-pw')).accessToken;
+  });
+  afterAll(async () => {
+    await t?.close();
+    await s3?.close();
+  });
+
+  const count = async (table: string, where = '1 = 1', params: unknown[] = []) =>
+    Number((await t.dataSource.query(`SELECT COUNT(*) AS n FROM \`${table}\` WHERE ${where}`, params))[0].n);
+
+  /** A fresh open case of the demo inspector, applied on the server. */
+  async function openCase(overrides: Record<string, unknown> = {}): Promise<string> {
+    const id = randomUUID();
+    const [result] = await push(t, inspector, [upsert('case', id, demo.case(overrides))]);
+    expect(result).toMatchObject({ status: 'applied', version: 1 });
+    return id;
+  }
+
+  it('creates a whole site visit in one batch, uploads its files and pulls every record back', async () => {
+    const ids = {
+      case: randomUUID(), sample: randomUUID(), check: randomUUID(), scan: randomUUID(), raw: randomUUID(),
+      photo1: randomUUID(), photo2: randomUUID(), note: randomUUID(), handover: randomUUID(), escalation: randomUUID(),
+    };
+    const photo1 = randomBytes(48_000);
+    const photo2 = randomBytes(20_000);
+    const raw = Buffer.from('##TITLE=demo raman scan\n##JCAMP-DX=4.24\n##XYDATA=(X++(Y..Y))\n200 10 11 12\n##END=\n');
+    const sent: Record<string, [string, Record<string, unknown>]> = {
+      case: ['case', demo.case()],
+      sample: ['sample', demo.sample(ids.case)],
+      check: ['instrumentCheck', demo.instrumentCheck(ids.case)],
+      scan: ['scan', demo.scan(ids.sample, { instrumentCheckId: ids.check, rawAttachmentId: ids.raw, rawSha256: sha256(raw) })],
+      raw: ['attachment', { ownerType: 'scan', ownerId: ids.scan, kind: 'raw-scan', fileName: 'S-01.jdx', contentType: 'chemical/x-jcamp-dx', size: raw.length, sha256: sha256(raw) }],
+      photo1: ['attachment', demo.photo('sample', ids.sample, photo1)],
+      photo2: ['attachment', demo.photo('case', ids.case, photo2, { fileName: 'gate.png', contentType: 'image/png' })],
+      note: ['note', demo.note(ids.case, ids.sample)],
+      handover: ['handover', demo.handover(ids.sample)],
+      escalation: ['escalation', { caseId: ids.case, scanId: ids.scan, raisedAt: '2026-11-30T09:00:00.000Z', reason: 'Likely oxidiser near fuel drums', hazardClasses: ['oxidiser'] }],
+    };
+    const changes = Object.entries(sent).map(([key, [entity, data]]) => upsert(entity, ids[key as keyof typeof ids], data));
+    const results = await push(t, inspector, changes);
+    expect(results.map((result) => [result.status, result.version])).toEqual(changes.map(() => ['applied', 1]));
+
+    for (const [id, bytes, type] of [[ids.photo1, photo1, 'image/jpeg'], [ids.photo2, photo2, 'image/png'], [ids.raw, raw, 'chemical/x-jcamp-dx']] as const) {
+      const uploaded = await uploadWhole(t, inspector, id, bytes, type).expect(200);
+      expect(uploaded.body).toEqual({ id, size: bytes.length, receivedBytes: bytes.length, complete: true, sha256: sha256(bytes), uploadedAt: expect.any(String) });
+    }
+
+    const { changes: pulled } = await pullAll(t, inspector);
+    const byId = new Map(pulled.map((record) => [record.id, record]));
+    for (const [key, [entity, data]] of Object.entries(sent)) {
+      const record = byId.get(ids[key as keyof typeof ids]);
+      expect(record).toMatchObject({ entity, version: 1, deleted: false, data });
+    }
+    const me = (await t.http().get('/api/me').set('Authorization', `Bearer ${inspector}`)).body.id;
+    expect(byId.get(ids.case)?.data).toMatchObject({ inspectorId: me, status: 'open' });
+    expect(byId.get(ids.note)?.data).toMatchObject({ authorId: me, caseId: ids.case });
+    expect(byId.get(ids.escalation)?.data).toMatchObject({ raisedBy: me, status: 'raised' });
+    expect(byId.get(ids.scan)?.data).toMatchObject({ caseId: ids.case, serverResult: null, resultMismatch: null, serverRecomputedAt: null });
+    expect(byId.get(ids.photo1)?.data).toMatchObject({ receivedBytes: photo1.length, uploadedAt: expect.any(String) });
+
+    // Behind the API: one row each, and the stored objects hash to the declared values.
+    expect(await count('cases', 'id = ?', [ids.case])).toBe(1);
+    for (const table of ['samples', 'instrument_checks', 'scans', 'site_notes', 'handovers', 'escalations']) {
+      expect(await count(table, 'caseId = ?', [ids.case])).toBe(1);
+    }
+    const stored: { id: string; storageKey: string; sha256: string }[] = await t.dataSource.query(
+      'SELECT id, storageKey, sha256 FROM attachments WHERE caseId = ? ORDER BY id',
+      [ids.case],
+    );
+    expect(stored).toHaveLength(3);
+    const client = createS3Client(t.config.s3);
+    for (const row of stored) {
+      const object = await client.send(new GetObjectCommand({ Bucket: t.config.s3.bucket, Key: row.storageKey }));
+      expect(sha256(Buffer.from(await object.Body!.transformToByteArray()))).toBe(row.sha256);
+    }
+    client.destroy();
+
+    const detail = await t.http().get(`/api/cases/${ids.case}`).set('Authorization', `Bearer ${supervisor}`).expect(200);
+    expect(detail.body.case).toMatchObject({ id: ids.case, siteName: 'Quay 7 drum store, Port Averin' });
+    expect(detail.body.samples.map((row: { id: string }) => row.id)).toEqual([ids.sample]);
+    expect(detail.body.attachments.map((row: { id: string }) => row.id).sort()).toEqual([ids.photo1, ids.photo2, ids.raw].sort());
+    for (const key of ['handovers', 'instrumentChecks', 'scans', 'notes', 'escalations']) expect(detail.body[key]).toHaveLength(1);
+
+    const supervisorSees = new Set((await pullAll(t, supervisor)).changes.map((record) => record.id));
+    const safetySees = new Set((await pullAll(t, safety)).changes.map((record) => record.id));
+    const otherSees = new Set((await pullAll(t, otherInspector)).changes.map((record) => record.id));
+    for (const id of Object.values(ids)) {
+      expect(supervisorSees.has(id)).toBe(true);
+      expect(safetySees.has(id)).toBe(true);
+      expect(otherSees.has(id)).toBe(false);
+    }
+  });
+
+  it('answers a re-sent batch from the stored outcomes and changes nothing', async () => {
+    const caseId = randomUUID();
+    const sampleId = randomUUID();
+    const changes = [upsert('case', caseId, demo.case()), upsert('sample', sampleId, demo.sample(caseId)), upsert('sample', randomUUID(), { label: '' })];
+    const batchId = randomUUID();
+    const first = await push(t, inspector, changes, batchId);
+    expect(first.map((result) => result.status)).toEqual(['applied', 'applied', 'rejected']);
+    const { cursor } = await pullAll(t, inspector);
+
+    const second = await push(t, inspector, changes, batchId);
+    expect(second.slice(0, 2)).toEqual([
+      { changeId: changes[0].changeId, status: 'duplicate', firstStatus: 'applied', version: 1 },
+      { changeId: changes[1].changeId, status: 'duplicate', firstStatus: 'applied', version: 1 },
+    ]);
+    expect(second[2]).toMatchObject({ status: 'duplicate', firstStatus: 'rejected', reason: first[2].reason });
+    expect(await count('cases', 'id = ?', [caseId])).toBe(1);
+    expect(await count('samples', 'caseId = ?', [caseId])).toBe(1);
+    expect((await pullAll(t, inspector, cursor)).changes).toEqual([]);
+  });
+
+  it('rejects only the invalid record of a batch, naming what is wrong', async () => {
+    const caseId = await openCase();
+    const good = upsert('note', randomUUID(), demo.note(caseId));
+    const bad = upsert('sample', randomUUID(), { ...demo.sample(caseId), label: '', observations: { odour: 'sharp' } });
+    const alsoGood = upsert('sample', randomUUID(), demo.sample(caseId, { label: 'S-02' }));
+    const results = await push(t, inspector, [good, bad, alsoGood]);
+    expect(results.map((result) => result.status)).toEqual(['applied', 'rejected', 'applied']);
+    expect(results[1].reason).toMatch(/^Invalid sample: /);
+    expect(results[1].reason).toContain('label must be longer than or equal to 1 characters');
+    expect(results[1].reason).toContain('observations.odour: property odour should not exist');
+    expect(await count('samples', 'id = ?', [bad.id])).toBe(0);
+
+    const envelope = await push(t, inspector, [{ ...upsert('case', randomUUID(), demo.case()), entity: 'spaceship' }, { changeId: 'nope' } as never]);
+    expect(envelope[0]).toMatchObject({ status: 'rejected', reason: expect.stringContaining('entity must be one of case, sample') });
+    expect(envelope[1]).toMatchObject({ changeId: 'nope', status: 'rejected', reason: expect.stringContaining('changeId must be a UUID') });
+  });
+
+  it('detects a conflict between two tablets editing the same version, and applies the resolution', async () => {
+    const caseId = await openCase();
+    const [fromA] = await push(t, inspector, [upsert('case', caseId, demo.case({ siteName: 'Quay 7 (tablet A)' }), 1)]);
+    expect(fromA).toMatchObject({ status: 'applied', version: 2 });
+    const [fromB] = await push(t, inspector, [upsert('case', caseId, demo.case({ weatherNotes: 'Rain from 10:00 (tablet B)' }), 1)]);
+    expect(fromB.status).toBe('conflict');
+    expect(fromB.server).toMatchObject({ entity: 'case', id: caseId, version: 2, deleted: false, data: { siteName: 'Quay 7 (tablet A)', weatherNotes: 'Dry, light onshore wind' } });
+    const [row] = await t.dataSource.query('SELECT siteName, weatherNotes, version FROM cases WHERE id = ?', [caseId]);
+    expect(row).toEqual({ siteName: 'Quay 7 (tablet A)', weatherNotes: 'Dry, light onshore wind', version: 2 });
+
+    const merged = demo.case({ siteName: 'Quay 7 (tablet A)', weatherNotes: 'Rain from 10:00 (tablet B)' });
+    const [resolution] = await push(t, inspector, [upsert('case', caseId, merged, fromB.server!.version)]);
+    expect(resolution).toMatchObject({ status: 'applied', version: 3 });
+    const pulled = (await pullAll(t, inspector)).changes.find((record) => record.id === caseId);
+    expect(pulled).toMatchObject({ version: 3, data: merged });
+  });
+
+  it("rejects an inspector's changes to another inspector's case, and refuses pushes from readers", async () => {
+    const caseId = await openCase();
+    const results = await push(t, otherInspector, [
+      upsert('sample', randomUUID(), demo.sample(caseId)),
+      upsert('case', caseId, demo.case({ siteName: 'Taken over' }), 1),
+      remove('case', caseId, 1),
+    ]);
+    for (const result of results) {
+      expect(result).toMatchObject({ status: 'rejected', reason: `Case ${caseId} belongs to another inspector: only its own inspector can change it` });
+      expect(result.server).toBeUndefined();
+    }
+    expect((await t.dataSource.query('SELECT siteName, deletedAt FROM cases WHERE id = ?', [caseId]))[0]).toEqual({ siteName: 'Quay 7 drum store, Port Averin', deletedAt: null });
+    const other = await t.http().get(`/api/cases/${caseId}`).set('Authorization', `Bearer ${otherInspector}`).expect(404);
+    expect(other.body.message).toBe(`No case with the id ${caseId} is visible to you`);
+  });
+
+  it('freezes a submitted case until the inspector reopens it, and keeps review statuses off the tablet', async () => {
+    const caseId = await openCase();
+    const [submitted] = await push(t, inspector, [upsert('case', caseId, demo.case({ status: 'submitted' }), 1)]);
+    expect(submitted).toMatchObject({ status: 'applied', version: 2 });
+    const [frozen] = await push(t, inspector, [upsert('sample', randomUUID(), demo.sample(caseId))]);
+    expect(frozen).toMatchObject({ status: 'rejected', reason: `Case ${caseId} is submitted: reopen it before changing what belongs to it` });
+    const [accepted] = await push(t, inspector, [upsert('case', caseId, demo.case({ status: 'accepted' }), 2)]);
+    expect(accepted.reason).toContain('status must be open or submitted');
+    const [reopened] = await push(t, inspector, [upsert('case', caseId, demo.case({ status: 'open' }), 2)]);
+    expect(reopened).toMatchObject({ status: 'applied', version: 3 });
+    await t.dataSource.query("UPDATE cases SET status = 'in_review' WHERE id = ?", [caseId]);
+    const [inReview] = await push(t, inspector, [upsert('case', caseId, demo.case(), 3)]);
+    expect(inReview.reason).toBe(`Case ${caseId} is in_review: it is with the supervisors and cannot be changed from the tablet`);
+  });
+
+  it('passes deletions on as tombstones and keeps hand-overs and instrument checks permanent', async () => {
+    const caseId = await openCase();
+    const sampleId = randomUUID();
+    const noteId = randomUUID();
+    const handoverId = randomUUID();
+    await push(t, inspector, [upsert('sample', sampleId, demo.sample(caseId)), upsert('note', noteId, demo.note(caseId)), upsert('handover', handoverId, demo.handover(sampleId))]);
+    const { cursor } = await pullAll(t, inspector);
+    const results = await push(t, inspector, [
+      remove('note', noteId, 1),
+      remove('handover', handoverId, 1),
+      upsert('handover', handoverId, { ...demo.handover(sampleId), to: 'Someone else' }, 1),
+      upsert('scan', randomUUID(), demo.scan(sampleId, { technique: 'ir', excitationNm: 1064 })),
+      upsert('scan', randomUUID(), demo.scan(sampleId, { excitationNm: undefined })),
+      upsert('scan', randomUUID(), demo.scan(sampleId, { result: { codeVersion: '0.1.0', parameters: {} } })),
+    ]);
+    expect(results.map((result) => result.status)).toEqual(['applied', 'rejected', 'rejected', 'rejected', 'rejected', 'rejected']);
+    expect(results[1].reason).toBe('A handover is a permanent record: it cannot be deleted');
+    expect(results[2].reason).toBe('A handover is a permanent record: it cannot be changed once sent');
+    expect(results[3].reason).toBe('excitationNm is only for Raman scans; leave it out for IR');
+    expect(results[4].reason).toContain('excitationNm (laser wavelength in nm) is required for a Raman scan');
+    expect(results[5].reason).toContain('result needs libraryVersion');
+    const after = await pullAll(t, inspector, cursor);
+    expect(after.changes).toEqual([expect.objectContaining({ entity: 'note', id: noteId, version: 2, deleted: true })]);
+    const detail = await t.http().get(`/api/cases/${caseId}`).set('Authorization', `Bearer ${inspector}`).expect(200);
+    expect(detail.body.notes).toEqual([]);
+    expect(detail.body.handovers).toHaveLength(1);
+  });
+
+  it('pages pulls in write order with a cursor that never repeats or skips', async () => {
+    const caseId = await openCase();
+    await push(t, inspector, Array.from({ length: 5 }, (_, i) => upsert('note', randomUUID(), { ...demo.note(caseId), text: `note ${i}` })));
+    const seen: number[] = [];
+    let cursor = '0';
+    for (let page = 0; page < 1000; page++) {
+      const response = await t.http().get('/api/sync/pull').query({ cursor, limit: 3 }).set('Authorization', `Bearer ${inspector}`).expect(200);
+      expect(response.body.changes.length).toBeLessThanOrEqual(3);
+      seen.push(...response.body.changes.map((record: { syncSeq: number }) => record.syncSeq));
+      cursor = response.body.cursor;
+      if (!response.body.hasMore) break;
+    }
+    expect(seen).toEqual([...seen].sort((a, b) => a - b));
+    expect(new Set(seen).size).toBe(seen.length);
+    const [{ n }] = await t.dataSource.query('SELECT value AS n FROM sync_counter');
+    expect(Number(cursor)).toBe(Number(n));
+    const bad = await t.http().get('/api/sync/pull').query({ cursor: '-1' }).set('Authorization', `Bearer ${inspector}`).expect(400);
+    expect(bad.body.message).toContain('cursor must be the cursor string of a previous pull');
+  });
+});
