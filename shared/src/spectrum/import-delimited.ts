@@ -24,7 +24,7 @@ export function importDelimited(text: string, options: ImportOptions, minPoints:
   let firstData = -1;
   for (let i = 0; i < rows.length; i++) {
     const cells = rows[i];
-    if (cells.length === 0 || (cells.length === 1 && cells[0] === '') || cells[0].startsWith('#')) continue;
+    if (isBlankOrComment(cells)) continue;
     if (isDataRow(cells, decimalComma)) {
       firstData = i;
       break;
@@ -42,14 +42,13 @@ export function importDelimited(text: string, options: ImportOptions, minPoints:
   const y: number[] = [];
   for (let i = firstData; i < rows.length; i++) {
     const cells = rows[i];
-    if (cells.length === 0 || (cells.length === 1 && cells[0] === '') || cells[0].startsWith('#')) continue;
-    const field = header[xCol] ?? `column ${xCol + 1}`;
+    if (isBlankOrComment(cells)) continue;
     if (cells.length <= Math.max(xCol, yCol)) {
       throw new SpectrumImportError('not-numeric', `expected at least ${Math.max(xCol, yCol) + 1} columns, found ${cells.length}`, {
         line: i + 1,
       });
     }
-    x.push(parseNumber(cells[xCol], decimalComma, i + 1, field));
+    x.push(parseNumber(cells[xCol], decimalComma, i + 1, header[xCol] ?? `column ${xCol + 1}`));
     y.push(parseNumber(cells[yCol], decimalComma, i + 1, header[yCol] ?? `column ${yCol + 1}`));
   }
   if (header.length > 0) {
@@ -80,6 +79,10 @@ function guessDelimiter(text: string): string {
   const sample = text.slice(0, 20000).split(/\r?\n/).filter((l) => l.trim() !== '' && !l.trimStart().startsWith('#'));
   for (const candidate of ['\t', ';', ',']) if (sample.some((l) => l.includes(candidate))) return candidate;
   return ' ';
+}
+
+function isBlankOrComment(cells: readonly string[]): boolean {
+  return cells.length === 0 || (cells.length === 1 && cells[0] === '') || cells[0].startsWith('#');
 }
 
 function isDataRow(cells: string[], decimalComma: boolean): boolean {

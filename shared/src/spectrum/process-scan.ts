@@ -32,17 +32,17 @@ export interface ProcessedScan {
 
 /**
  * Process one scan for identification: uniform grid, absorbance, saturation check, cosmic-ray
- * removal (Raman), ATR correction (IR), airPLS baseline, Savitzky–Golay smoothing, noise-based
+ * removal (Raman), ATR correction (IR), arPLS baseline, Savitzky–Golay smoothing, noise-based
  * peak picking with FWHM, interference flags and a quality verdict.
  */
 export function processScan(input: Spectrum, options: ProcessOptions): ProcessedScan {
   validateSpectrum(input);
   const gridStepCm1 = options.gridStepCm1 ?? defaultGridStep(input.xCm1);
+  const settings = resolveProcessOptions(options, gridStepCm1);
   const span = input.xCm1[input.xCm1.length - 1] - input.xCm1[0];
   if (span / gridStepCm1 > MAX_GRID_POINTS) {
     throw new RangeError(`a ${gridStepCm1} cm⁻¹ grid over ${span.toFixed(1)} cm⁻¹ would need more than ${MAX_GRID_POINTS} points`);
   }
-  const settings = resolveProcessOptions(options, gridStepCm1);
   if (input.ordinate !== 'intensity' && settings.technique === 'raman') {
     throw new RangeError(`a Raman scan must hold intensity, but this one holds ${input.ordinate}`);
   }
