@@ -9,6 +9,7 @@ import { buildDataSourceOptions } from './database/data-source-options';
 import { HealthModule } from './health/health.module';
 import { IdentifyModule } from './identify/identify.module';
 import { LibraryModule } from './library/library.module';
+import { SymmetryModule } from './symmetry/symmetry.module';
 import { SyncModule } from './sync/sync.module';
 import { UsersModule } from './users/users.module';
 
@@ -33,6 +34,7 @@ import { UsersModule } from './users/users.module';
     AttachmentsModule,
     LibraryModule,
     IdentifyModule,
+    SymmetryModule,
   ],
 })
 export class AppModule {}
