@@ -74,9 +74,11 @@ export class AttachmentUploadsService {
 
     const bytes = await readExactly(chunk.body, range.end - range.start + 1);
     await this.storage.put(chunkKey(id, range.start), bytes, 'application/octet-stream');
-    const moved = await this.dataSource
-      .getRepository(Attachment)
-      .update({ id, receivedBytes: range.start }, { receivedBytes: range.start + bytes.length });
+    const moved = await this.dataSource.transaction(async (manager) => {
+      // Under the sync lock, so a metadata change pushed at the same moment cannot write back a stale offset.
+      await lockSyncCounter(manager);
+      return manager.update(Attachment, { id, receivedBytes: range.start }, { receivedBytes: range.start + bytes.length });
+    });
     if (moved.affected !== 1) throw new ConflictException(`Another upload of ${id} moved on meanwhile: ask for its status and resume from there`);
     row.receivedBytes = range.start + bytes.length;
     if (row.receivedBytes === row.size) await this.complete(row);
@@ -109,7 +111,10 @@ export class AttachmentUploadsService {
     const actual = createHash('sha256').update(file).digest('hex');
     if (file.length !== row.size || actual !== row.sha256) {
       await this.storage.deletePrefix(stagingPrefix(row.id));
-      await this.dataSource.getRepository(Attachment).update({ id: row.id }, { receivedBytes: 0 });
+      await this.dataSource.transaction(async (manager) => {
+        await lockSyncCounter(manager);
+        await manager.update(Attachment, { id: row.id }, { receivedBytes: 0 });
+      });
       row.receivedBytes = 0;
       throw new UnprocessableEntityException(
         `The received file has SHA-256 ${actual}, not the declared ${row.sha256}: nothing was kept; upload it again from byte 0`,
