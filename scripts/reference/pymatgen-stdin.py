@@ -1,9 +1,9 @@
 #!/usr/bin/python3
 """pymatgen's point group for molecules given as JSON on stdin; prints JSON on stdout.
 
-Input:  [{"name": str, "symbols": [str], "positions": [[x, y, z], ...]}, ...]
+Input:  [{"name": str, "symbols": [str], "positions": [[x, y, z], ...], "repeats"?: int}, ...]
 Output: [{"name": str, "pointGroup": str, "operations": int, "seconds": float}, ...]
-seconds is the median wall time of `repeats` (argv[1], default 1) analyses, timed inside Python
+seconds is the median wall time of `repeats` (per molecule, else argv[1], default 1) analyses, timed inside Python
 so that process start-up is not counted. Settings as in pymatgen-pointgroups.py.
 Used by the live Vitest check and by scripts/bench/symmetry.mjs.
 """
@@ -24,7 +24,7 @@ def main():
     for m in json.load(sys.stdin):
         mol = Molecule(m['symbols'], m['positions'])
         times = []
-        for _ in range(repeats):
+        for _ in range(m.get('repeats', repeats)):
             t0 = time.perf_counter()
             pga = PointGroupAnalyzer(mol, tolerance=0.3, eigen_tolerance=0.001)
             name = pga.sch_symbol

@@ -84,14 +84,25 @@ function confirm(m: AtomMatcher, guess: Vec3, make: (d: Vec3) => Mat3, kind: 'ax
 export const confirmRotation = (m: AtomMatcher, axis: Vec3, n: number): Vec3 | undefined =>
   confirm(m, axis, (d) => rotation(d, (2 * Math.PI) / n), 'axis');
 
+/** The confirmed directions among the candidates, skipping candidates along an element already found. */
+function confirmAll(directions: readonly Vec3[], test: (d: Vec3) => Vec3 | undefined): Vec3[] {
+  const found: Vec3[] = [];
+  for (const d of directions) {
+    if (found.some((f) => sameLine(f, d, SAME_DIRECTION))) continue;
+    const confirmed = test(d);
+    if (confirmed && !found.some((f) => sameLine(f, confirmed, SAME_DIRECTION))) found.push(confirmed);
+  }
+  return found;
+}
+
 /** Every distinct C2 axis of the structure. */
 export function findC2Axes(s: PreparedStructure, m: AtomMatcher): Vec3[] {
-  return keepDistinct(candidates(s, 1).map((d) => confirmRotation(m, d, 2)).filter((d): d is Vec3 => d !== undefined));
+  return confirmAll(candidates(s, 1), (d) => confirmRotation(m, d, 2));
 }
 
 /** Every distinct mirror plane, as unit normals. */
 export function findMirrors(s: PreparedStructure, m: AtomMatcher): Vec3[] {
-  return keepDistinct(candidates(s, -1).map((d) => confirm(m, d, reflection, 'normal')).filter((d): d is Vec3 => d !== undefined));
+  return confirmAll(candidates(s, -1), (d) => confirm(m, d, reflection, 'normal'));
 }
 
 /** Whether the centre of mass is a centre of inversion. */
@@ -117,10 +128,4 @@ export function rotationOrder(s: PreparedStructure, m: AtomMatcher, axis: Vec3):
     if (refined) return { n, axis: refined };
   }
   return { n: 1, axis };
-}
-
-function keepDistinct(found: Vec3[]): Vec3[] {
-  const out: Vec3[] = [];
-  for (const d of found) if (!out.some((o) => sameLine(o, d, SAME_DIRECTION))) out.push(d);
-  return out;
 }

@@ -18,10 +18,10 @@ export class AtomMatcher {
     readonly tolerance: number,
     firstToTest: readonly number[] = [],
   ) {
-    // Cells span the loose search radius, so partners up to LOOSE × tolerance away are in the 27 cells.
-    this.cell = Math.max(LOOSE * tolerance, 0.3);
+    // Cells twice the loose search radius: a search sphere then meets at most two cells per axis.
+    this.cell = Math.max(2 * LOOSE * tolerance, 0.6);
     positions.forEach((p, i) => {
-      const key = this.key(p);
+      const key = this.cellOf(p);
       const list = this.grid.get(key);
       if (list) list.push(i);
       else this.grid.set(key, [i]);
@@ -31,21 +31,29 @@ export class AtomMatcher {
   }
 
   // Hashed cell index: a collision only adds candidates, which the distance test then rejects.
-  private key(p: Vec3, dx = 0, dy = 0, dz = 0): number {
-    const ix = Math.floor(p[0] / this.cell) + dx;
-    const iy = Math.floor(p[1] / this.cell) + dy;
-    const iz = Math.floor(p[2] / this.cell) + dz;
+  private key(ix: number, iy: number, iz: number): number {
     return (Math.imul(ix, 73856093) ^ Math.imul(iy, 19349663) ^ Math.imul(iz, 83492791)) | 0;
   }
 
-  /** Index and distance of the atom of the same kind as atom `i` nearest to point q (within one cell). */
-  nearest(q: Vec3, i: number): { index: number; distance: number } {
+  private cellOf(p: Vec3): number {
+    return this.key(Math.floor(p[0] / this.cell), Math.floor(p[1] / this.cell), Math.floor(p[2] / this.cell));
+  }
+
+  /** Distance from q to the atom found by the last `nearest` call (Infinity if none); avoids an object per lookup. */
+  lastDistance = Infinity;
+
+  /** Index of the atom of the same kind as atom `i` nearest to q among those within `radius` (−1 if none); see lastDistance. */
+  nearest(q: Vec3, i: number, radius = LOOSE * this.tolerance): number {
     let index = -1;
     let distance = Infinity;
-    for (let dx = -1; dx <= 1; dx++) {
-      for (let dy = -1; dy <= 1; dy++) {
-        for (let dz = -1; dz <= 1; dz++) {
-          for (const j of this.grid.get(this.key(q, dx, dy, dz)) ?? []) {
+    const c = this.cell;
+    const [x0, x1] = [Math.floor((q[0] - radius) / c), Math.floor((q[0] + radius) / c)];
+    const [y0, y1] = [Math.floor((q[1] - radius) / c), Math.floor((q[1] + radius) / c)];
+    const [z0, z1] = [Math.floor((q[2] - radius) / c), Math.floor((q[2] + radius) / c)];
+    for (let ix = x0; ix <= x1; ix++) {
+      for (let iy = y0; iy <= y1; iy++) {
+        for (let iz = z0; iz <= z1; iz++) {
+          for (const j of this.grid.get(this.key(ix, iy, iz)) ?? []) {
             if (this.kinds[j] !== this.kinds[i]) continue;
             const p = this.positions[j];
             const d = Math.hypot(p[0] - q[0], p[1] - q[1], p[2] - q[2]);
@@ -54,20 +62,22 @@ export class AtomMatcher {
         }
       }
     }
-    return { index, distance };
+    this.lastDistance = distance;
+    return index;
   }
 
   /** Whether op sends every atom to within `limit` (default: the tolerance) of an atom of the same kind. */
   holds(op: Mat3, limit = this.tolerance): boolean {
     for (const i of this.testOrder) {
-      if (this.nearest(apply(op, this.positions[i]), i).distance > limit) return false;
+      this.nearest(apply(op, this.positions[i]), i, limit);
+      if (this.lastDistance > limit) return false;
     }
     return true;
   }
 
   /**
    * Where op sends each atom and the largest miss (Å); the permutation is undefined when some atom
-   * has no partner within one grid cell or two atoms land on the same partner.
+   * has no partner within LOOSE × tolerance or two atoms land on the same partner.
    */
   permutation(op: Mat3): { permutation: number[] | undefined; maxDeviation: number } {
     const permutation: number[] = [];
@@ -75,7 +85,8 @@ export class AtomMatcher {
     let maxDeviation = 0;
     let valid = true;
     this.positions.forEach((p, i) => {
-      const { index, distance } = this.nearest(apply(op, p), i);
+      const index = this.nearest(apply(op, p), i);
+      const distance = this.lastDistance;
       maxDeviation = Math.max(maxDeviation, distance);
       if (index < 0 || used.has(index)) valid = false;
       used.add(index);
