@@ -33,6 +33,11 @@ describe('Compound library: reading and curating (e2e, MariaDB)', () => {
     expect(ammonia.body).toMatchObject({ origin: 'bundled', retired: false, version: 0, editedBy: null, compound: { id: 'ammonia', cas: '7664-41-7' } });
   });
 
+  it('documents its routes in the OpenAPI document', async () => {
+    const docs = await t.http().get('/api/docs-json').expect(200);
+    expect(Object.keys(docs.body.paths)).toEqual(expect.arrayContaining(['/api/library', '/api/library/{id}', '/api/library/{id}/history', '/api/identify', '/api/symmetry']));
+  });
+
   it('answers 404 for an unknown compound', async () => {
     const response = await t.http().get('/api/library/no-such-compound').set(as('inspector')).expect(404);
     expectErrorShape(response.body, 404, '/api/library/no-such-compound');
@@ -99,6 +104,11 @@ describe('Compound library: reading and curating (e2e, MariaDB)', () => {
       const mismatch = await t.http().put('/api/library/acetone').set(as('supervisor')).send(entry('methanol')).expect(400);
       expect(mismatch.body.message).toContain('the entry\'s id must be acetone');
       await t.http().put('/api/library/unknown-thing').set(as('supervisor')).send(entry('methanol')).expect(404);
+    });
+
+    it('refuses a misspelt field instead of dropping it', async () => {
+      const response = await t.http().put('/api/library/acetone').set(as('supervisor')).send({ ...entry('acetone'), synonym: ['propanone'] }).expect(400);
+      expect(response.body.details[0].messages).toEqual(['compound.synonym is not a field of a compound entry']);
     });
 
     it('adds a compound and lists it; the same id twice is 409', async () => {

@@ -8,5 +8,7 @@ import { IdentifyService } from './identify.service';
   imports: [LibraryModule],
   controllers: [IdentifyController],
   providers: [IdentifyService],
+  // For the server-side recomputation of a synced scan's result.
+  exports: [IdentifyService],
 })
 export class IdentifyModule {}

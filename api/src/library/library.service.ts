@@ -6,6 +6,7 @@ import { geometryProblems } from './geometry-check';
 import { LibraryEdit } from './library-edit.entity';
 import type { CurrentEdit } from './library-version';
 import { mergeLibrary, type CurrentLibrary } from './merge-library';
+import { unknownFields } from './unknown-fields';
 
 /** One compound as the library screens see it: its entry, where it comes from and its latest save. */
 export interface CompoundRecord {
@@ -90,7 +91,7 @@ export class LibraryService {
     return this.append(id, document, true, userId, state);
   }
 
-  /** validateCompound, the engine's Γvib check, then the whole library with the entry in place. */
+  /** validateCompound, no unknown fields, the engine's Γvib check, then the whole library with the entry in place. */
   private check(raw: unknown, state: LibraryState): Compound {
     const bundled = loadLibrary();
     let compound: Compound;
@@ -100,6 +101,8 @@ export class LibraryService {
       if (error instanceof TypeError) throw invalid([error.message]);
       throw error;
     }
+    const unknown = unknownFields(raw, compound);
+    if (unknown.length > 0) throw invalid(unknown.map((field) => `${field} is not a field of a compound entry`));
     const problems = geometryProblems(compound);
     if (problems.length > 0) throw invalid(problems);
     const others = currentEdits(state).filter((edit) => edit.compoundId !== compound.id);
