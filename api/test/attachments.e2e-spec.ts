@@ -79,7 +79,7 @@ describe('Attachment uploads (e2e, MariaDB + S3 fake)', () => {
 
   it('resumes an interrupted upload from the reported offset and verifies the whole file', async () => {
     const file = randomBytes(300_000);
-    const id = await declarePhoto(file);
+    const id = await declarePhoto(file, { fileName: 'Bay 3 – Probe ä.jpg' });
     expect((await status(id).expect(200)).body).toEqual({ id, size: file.length, receivedBytes: 0, complete: false, sha256: sha256(file), uploadedAt: null });
 
     const first = await chunk(id, file.subarray(0, 100_000), 0, file.length).expect(200);
@@ -105,6 +105,7 @@ describe('Attachment uploads (e2e, MariaDB + S3 fake)', () => {
 
     const download = await t.http().get(`/api/attachments/${id}/content`).set('Authorization', `Bearer ${supervisor}`).responseType('blob').expect(200);
     expect(download.headers['content-type']).toBe('image/jpeg');
+    expect(download.headers['content-disposition']).toBe(`attachment; filename="Bay 3 _ Probe _.jpg"; filename*=UTF-8''Bay%203%20%E2%80%93%20Probe%20%C3%A4.jpg`);
     expect(sha256(download.body as Buffer)).toBe(sha256(file));
     const staging = await t.dataSource.query('SELECT storageKey FROM attachments WHERE id = ?', [id]);
     expect(staging[0].storageKey).toBe(`attachments/${caseId}/${id}`);

@@ -18,6 +18,7 @@ import { ObjectStorageService } from '../storage/object-storage.service';
 import { lockSyncCounter, takeSyncSeq } from '../sync/sync-sequence';
 import { ATTACHMENT_RULES, mediaType } from './attachment-limits';
 import { chunkKey, fileKey, stagingPrefix } from './attachment-storage-keys';
+import { attachmentDisposition } from './content-disposition';
 import { Attachment } from './attachment.entity';
 import { parseContentRange } from './content-range';
 import { AttachmentStatusDto } from './dto/attachment-status.dto';
@@ -93,7 +94,7 @@ export class AttachmentUploadsService {
     return new StreamableFile(body, {
       type: row.contentType,
       length: row.size,
-      disposition: `attachment; filename="${row.fileName.replace(/["\r\n]/g, '_')}"`,
+      disposition: attachmentDisposition(row.fileName),
     });
   }
 

@@ -1,5 +1,6 @@
 import { ApiProperty } from '@nestjs/swagger';
 import { ArrayMaxSize, ArrayMinSize, IsArray, IsObject, IsString, IsUUID, Length } from 'class-validator';
+import { ChangeEnvelopeDto } from './change-envelope.dto';
 
 /** Most changes one push may carry; a client with more sends several batches. */
 export const MAX_CHANGES_PER_BATCH = 200;
@@ -18,7 +19,8 @@ export class PushRequestDto {
   @IsUUID()
   batchId: string;
 
-  @ApiProperty({ type: Object, isArray: true, description: 'ChangeEnvelope objects, applied in order' })
+  // Documented as envelopes but validated one by one by the change applier, so one bad change is rejected alone.
+  @ApiProperty({ type: ChangeEnvelopeDto, isArray: true, description: 'Applied in order, each on its own', maxItems: MAX_CHANGES_PER_BATCH })
   @IsArray()
   @ArrayMinSize(1)
   @ArrayMaxSize(MAX_CHANGES_PER_BATCH)
