@@ -125,4 +125,20 @@ describe('Sync when answers are lost after the server committed (e2e, seeded fau
     expect(changes).toHaveLength(known.size);
     expect(new Set(changes.map((record) => record.id))).toEqual(new Set(known.keys()));
   });
+
+  it('applies a batch once when three deliveries of it arrive at the same moment', async () => {
+    const caseId = randomUUID();
+    const batch = [upsert('case', caseId, demo.case()), ...Array.from({ length: 6 }, () => upsert('note', randomUUID(), demo.note(caseId)))];
+    const batchId = randomUUID();
+    const answers = await Promise.all([push(t, inspector, batch, batchId), push(t, inspector, batch, batchId), push(t, inspector, batch, batchId)]);
+    for (const [i, change] of batch.entries()) {
+      const statuses = answers.map((results) => results[i].status).sort();
+      // Exactly one delivery applied each change; the others saw its stored outcome.
+      expect(statuses).toEqual(['applied', 'duplicate', 'duplicate']);
+      expect(answers.map((results) => results[i].version)).toEqual([1, 1, 1]);
+      expect(change.changeId).toBe(answers[0][i].changeId);
+    }
+    const [{ n }] = await t.dataSource.query('SELECT COUNT(*) AS n FROM site_notes WHERE caseId = ?', [caseId]);
+    expect(Number(n)).toBe(6);
+  });
 });
