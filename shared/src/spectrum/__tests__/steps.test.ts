@@ -126,6 +126,17 @@ describe('interference flags', () => {
     expect(flaggedPeaks.map((p) => p.flag)).toEqual(['atmospheric-co2', 'atmospheric-co2', 'water-vapour', 'water-vapour', 'atr-diamond']);
   });
 
+  it('keeps strong CO2 bands of a gas cell and strong broad condensed bands in the CO2 region as the sample', () => {
+    const rel = (x: number, widthCm1: number, relativeHeight: number) => ({ x, height: relativeHeight, widthCm1, relativeHeight });
+    const gas = separateFlaggedPeaks([rel(2337, 8, 1), rel(2361, 8, 0.9), rel(667, 2, 0.6), rel(2345, 6, 0.05)], interferenceRegions('ir', 'gas', false));
+    expect(gas.peaks.map((p) => p.x)).toEqual([2337, 2361, 667]);
+    expect(gas.flaggedPeaks.map((p) => [p.x, p.flag])).toEqual([[2345, 'atmospheric-co2']]);
+    // Condensed: an isocyanate-like band (strong, 40 cm⁻¹ wide) reaching 2285 counts; a weak broad one and a strong narrow one do not.
+    const condensed = separateFlaggedPeaks([rel(2285, 40, 0.8), rel(2350, 40, 0.1), rel(2340, 12, 0.9)], interferenceRegions('ir', 'condensed', false));
+    expect(condensed.peaks.map((p) => p.x)).toEqual([2285]);
+    expect(condensed.flaggedPeaks.map((p) => p.x)).toEqual([2350, 2340]);
+  });
+
   it('flags no diamond without ATR, no water by width in a gas cell, and nothing for Raman', () => {
     expect(interferenceRegions('ir', 'condensed', false).some((r) => r.flag === 'atr-diamond')).toBe(false);
     expect(interferenceRegions('ir', 'gas', false).some((r) => r.flag === 'water-vapour')).toBe(false);
