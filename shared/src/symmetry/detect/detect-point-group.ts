@@ -1,6 +1,7 @@
 /** The structure check's first step: which point group a structure has, and the structure in its standard orientation. */
 import type { Atom, Mat3, PlanarConvention, Structure, Vec3 } from '../types.js';
-import { apply } from '../mat3.js';
+import { apply, mul } from '../mat3.js';
+import { polishFrame } from './align.js';
 import { prepareStructure } from './prepare.js';
 import { AtomMatcher } from './matcher.js';
 import { classify } from './classify.js';
@@ -68,15 +69,21 @@ export function detectPointGroup(structure: Structure, options: DetectOptions = 
   const prepared = prepareStructure(structure, tolerance);
   const matcher = new AtomMatcher(prepared.positions, prepared.kinds, tolerance, prepared.classes.flat());
   const { name, x, y, z } = classify(prepared, matcher, convention);
-  const rotation: Mat3 = [...x, ...y, ...z] as unknown as Mat3;
+  const frameRotation: Mat3 = [...x, ...y, ...z] as unknown as Mat3;
+  const ops = standardOperations(name);
+  const matrices = ops.map((o) => o.matrix);
+
+  // Polish the frame when every operation already finds partners at the loose distance.
+  const framed = prepared.positions.map((p) => apply(frameRotation, p));
+  const loose = new AtomMatcher(framed, prepared.kinds, tolerance).permutationsFor(matrices);
+  const rotation = loose ? mul(polishFrame(framed, matrices, loose), frameRotation) : frameRotation;
 
   const orientedPositions = prepared.positions.map((p) => apply(rotation, p));
   const oriented = new AtomMatcher(orientedPositions, prepared.kinds, tolerance);
-  const ops = standardOperations(name);
   const permutations: number[][] = [];
   let maxDeviation = 0;
-  for (const op of ops) {
-    const { permutation, maxDeviation: d } = oriented.permutation(op.matrix);
+  for (const op of matrices) {
+    const { permutation, maxDeviation: d } = oriented.permutation(op);
     maxDeviation = Math.max(maxDeviation, d);
     if (!permutation || d > tolerance) {
       throw new RangeError(
@@ -86,7 +93,6 @@ export function detectPointGroup(structure: Structure, options: DetectOptions = 
     permutations.push(permutation);
   }
   const symmetrised = options.symmetrise === true;
-  const matrices = ops.map((o) => o.matrix);
   const finalPositions = symmetrised ? symmetrisePositions(orientedPositions, matrices, permutations) : orientedPositions;
   const linear = name === 'C∞v' || name === 'D∞h';
 

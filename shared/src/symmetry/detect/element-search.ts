@@ -9,25 +9,27 @@ import { improper, INVERSION, reflection, rotation } from '../mat3.js';
 import { LOOSE, type AtomMatcher } from './matcher.js';
 import { refineDirection } from './refine.js';
 import type { PreparedStructure } from './prepare.js';
-import { addScaled, cross, distanceFromLine, gcd, norm, sameLine, unit } from './vec.js';
+import { addScaled, cross, distanceFromLine, gcd, sameLine, unit } from './vec.js';
 
 /** Two found axes or plane normals closer than this (radians) are the same element. */
 export const SAME_DIRECTION = 0.05;
 
-/** The two reference atoms: a0 from the smallest class, a1 the atom least collinear with it. */
-function referenceAtoms(s: PreparedStructure): { a0: number; a1: number | undefined } {
-  const smallest = s.classes[0];
-  const a0 = smallest[0];
+/**
+ * The two reference atoms: a0 from the smallest class, a1 well off the line through a0 (by more
+ * than the loose match distance, so that noise cannot make an atom on that line look off it),
+ * taken from the smallest class that has one.
+ */
+function referenceAtoms(s: PreparedStructure, tolerance: number): { a0: number; a1: number | undefined } {
+  const a0 = s.classes[0][0];
   const u0 = unit(s.positions[a0])!;
   let a1: number | undefined;
   let best = 0;
-  // Prefer the same class (its partners are fewest), then any other class.
   for (const members of s.classes) {
     for (const j of members) {
-      const off = distanceFromLine(s.positions[j], u0) / norm(s.positions[j]);
-      if (off > best + 1e-9) [a1, best] = [j, off];
+      const off = distanceFromLine(s.positions[j], u0);
+      if (off > best) [a1, best] = [j, off];
     }
-    if (best > 0.1) break;
+    if (best > LOOSE * tolerance) break;
   }
   return { a0, a1 };
 }
@@ -47,8 +49,8 @@ function dedupe(directions: Vec3[]): Vec3[] {
  * class, so the axis runs along a0 + b (or a0 itself); likewise for a1; if both are sent to their
  * opposites the axis is a0 × a1. Mirror normals run along a0 − b, a1 − c, or a0 × a1.
  */
-function candidates(s: PreparedStructure, sign: 1 | -1): Vec3[] {
-  const { a0, a1 } = referenceAtoms(s);
+function candidates(s: PreparedStructure, sign: 1 | -1, tolerance: number): Vec3[] {
+  const { a0, a1 } = referenceAtoms(s, tolerance);
   const out: Vec3[] = [...s.axes];
   const p0 = s.positions[a0];
   const refs = a1 === undefined ? [a0] : [a0, a1];
@@ -97,12 +99,12 @@ function confirmAll(directions: readonly Vec3[], test: (d: Vec3) => Vec3 | undef
 
 /** Every distinct C2 axis of the structure. */
 export function findC2Axes(s: PreparedStructure, m: AtomMatcher): Vec3[] {
-  return confirmAll(candidates(s, 1), (d) => confirmRotation(m, d, 2));
+  return confirmAll(candidates(s, 1, m.tolerance), (d) => confirmRotation(m, d, 2));
 }
 
 /** Every distinct mirror plane, as unit normals. */
 export function findMirrors(s: PreparedStructure, m: AtomMatcher): Vec3[] {
-  return confirmAll(candidates(s, -1), (d) => confirm(m, d, reflection, 'normal'));
+  return confirmAll(candidates(s, -1, m.tolerance), (d) => confirm(m, d, reflection, 'normal'));
 }
 
 /** Whether the centre of mass is a centre of inversion. */

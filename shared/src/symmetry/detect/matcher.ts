@@ -94,4 +94,15 @@ export class AtomMatcher {
     });
     return { permutation: valid ? permutation : undefined, maxDeviation };
   }
+
+  /** Permutations for every operation at the loose distance, or undefined if any operation has none. */
+  permutationsFor(operations: readonly Mat3[]): number[][] | undefined {
+    const out: number[][] = [];
+    for (const op of operations) {
+      const { permutation } = this.permutation(op);
+      if (!permutation) return undefined;
+      out.push(permutation);
+    }
+    return out;
+  }
 }

@@ -15,7 +15,7 @@ export interface PreparedStructure {
   /** Principal moments (u·Å², ascending) and their unit axes in the input frame. */
   readonly moments: readonly [number, number, number];
   readonly axes: readonly [Vec3, Vec3, Vec3];
-  /** Atoms of one kind at one distance from the centre (within the tolerance), centre atoms excluded; smallest first. */
+  /** Atoms of one kind at one distance from the centre (within the tolerance), centre atoms excluded; smallest first, then farthest. */
   readonly classes: readonly (readonly number[])[];
 }
 
@@ -67,5 +67,6 @@ function equivalenceClasses(positions: readonly Vec3[], kinds: readonly string[]
     }
     classes.push(current);
   }
-  return classes.sort((a, b) => a.length - b.length);
+  // Smallest first; among equal sizes the farthest from the centre, whose direction noise disturbs least.
+  return classes.sort((a, b) => a.length - b.length || radius[b[0]] - radius[a[0]]);
 }
