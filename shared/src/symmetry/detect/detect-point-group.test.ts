@@ -141,6 +141,27 @@ describe('result contents', () => {
     for (const op of d.operations) expect(Math.abs(det(op as Mat3))).toBeCloseTo(1, 9);
   });
 
+  it('labels the elements of BF3 from the catalogue classes', () => {
+    const r = 1.31; // B–F from memory
+    const bf3 = detectPointGroup({
+      atoms: [{ element: 'B', position: [0, 0, 0] }, ...[0, 1, 2].map((k) => ({ element: 'F', position: [r * Math.cos((2 * Math.PI * k) / 3 + 0.4), r * Math.sin((2 * Math.PI * k) / 3 + 0.4), 0] as const }))],
+    });
+    expect(bf3.pointGroup).toBe('D3h');
+    const count = (label: string) => bf3.elements.filter((e) => e.label === label).length;
+    expect([count('C3'), count('C2'), count('σh'), count('σv'), count('S3')]).toEqual([1, 3, 1, 3, 1]);
+  });
+
+  it('detects axial groups outside the catalogue with their generated operations', () => {
+    // Tropylium-like C7H7 ring (C–C 1.40, C–H 1.08 Å, from memory): D7h, not in the character tables.
+    const rc = 1.4 / (2 * Math.sin(Math.PI / 7));
+    const ring = (element: string, rad: number) => Array.from({ length: 7 }, (_, k) => ({ element, position: [rad * Math.cos((2 * Math.PI * k) / 7), rad * Math.sin((2 * Math.PI * k) / 7), 0] as const }));
+    const d = detectPointGroup({ atoms: [...ring('C', rc), ...ring('H', rc + 1.08)] });
+    expect(d.pointGroup).toBe('D7h');
+    expect(d.order).toBe(28);
+    expect(d.elements.find((e) => e.kind === 'Cn' && e.order === 7)?.label).toBe('C7');
+    expect(d.elements.filter((e) => e.kind === 'σ' && e.label === 'σv')).toHaveLength(7);
+  });
+
   it('reports linear molecules with an infinite order', () => {
     const co2 = detectPointGroup(parseXyz('3\nCO2\nC 0 0 0\nO 1.16 0 0\nO -1.16 0 0\n'));
     expect(co2.pointGroup).toBe('D∞h');
