@@ -38,6 +38,12 @@ describe('Compound library: reading and curating (e2e, MariaDB)', () => {
     expect(Object.keys(docs.body.paths)).toEqual(expect.arrayContaining(['/api/library', '/api/library/{id}', '/api/library/{id}/history', '/api/identify', '/api/symmetry']));
   });
 
+  it('lets a tablet revalidate its copy: the same library answers 304 to its ETag', async () => {
+    const first = await t.http().get('/api/library').set(as('inspector')).expect(200);
+    expect(first.headers.etag).toEqual(expect.any(String));
+    await t.http().get('/api/library').set(as('inspector')).set('If-None-Match', first.headers.etag).expect(304);
+  });
+
   it('answers 404 for an unknown compound', async () => {
     const response = await t.http().get('/api/library/no-such-compound').set(as('inspector')).expect(404);
     expectErrorShape(response.body, 404, '/api/library/no-such-compound');
