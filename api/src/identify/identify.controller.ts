@@ -62,7 +62,7 @@ export class IdentifyController {
   @ApiOkResponse({ type: IdentifyResultDto })
   @ApiBadRequestResponse({ type: ErrorResponseDto, description: 'Unreadable file, invalid spectrum or peaks, wrong technique or phase' })
   @ApiPayloadTooLargeResponse({ type: ErrorResponseDto, description: 'The file is over the size limit' })
-  async identifyScan(@UploadedFile() file: UploadedScanFile | undefined, @Body() request: IdentifyRequestDto): Promise<IdentifyAnswer> {
+  async rank(@UploadedFile() file: UploadedScanFile | undefined, @Body() request: IdentifyRequestDto): Promise<IdentifyAnswer> {
     const given = [file && 'file', request.spectrum && 'spectrum', request.peaks && 'peaks'].filter(Boolean);
     if (given.length !== 1) {
       throw new BadRequestException(
