@@ -38,9 +38,12 @@ export function prepareStructure(structure: Structure, tolerance: number): Prepa
     for (let p = 0; p < 3; p++) for (let q = 0; q < 3; q++) t.set(p, q, t.get(p, q) + masses[i] * ((p === q ? r2 : 0) - r[p] * r[q]));
   });
   const eig = new EigenvalueDecomposition(t, { assumeSymmetric: true });
-  const order = [0, 1, 2].sort((p, q) => eig.realEigenvalues[p] - eig.realEigenvalues[q]);
-  const column = (c: number): Vec3 => [eig.eigenvectorMatrix.get(0, c), eig.eigenvectorMatrix.get(1, c), eig.eigenvectorMatrix.get(2, c)];
-  const moments = order.map((c) => Math.max(0, eig.realEigenvalues[c])) as unknown as [number, number, number];
+  // ml-matrix's getters copy on every access: read them once.
+  const values = eig.realEigenvalues;
+  const vectors = eig.eigenvectorMatrix;
+  const order = [0, 1, 2].sort((p, q) => values[p] - values[q]);
+  const column = (c: number): Vec3 => [vectors.get(0, c), vectors.get(1, c), vectors.get(2, c)];
+  const moments = order.map((c) => Math.max(0, values[c])) as unknown as [number, number, number];
   const axes = order.map(column) as unknown as [Vec3, Vec3, Vec3];
 
   return { atoms, positions, masses, kinds, centre, moments, axes, classes: equivalenceClasses(positions, kinds, tolerance) };

@@ -9,12 +9,15 @@ import { dot } from './vec.js';
 /** The unit eigenvector of the smallest eigenvalue of a 3×3 symmetric matrix, if it is well separated. */
 function smallestDirection(t: Matrix): Vec3 | undefined {
   const eig = new EigenvalueDecomposition(t, { assumeSymmetric: true });
-  const order = [0, 1, 2].sort((p, q) => eig.realEigenvalues[p] - eig.realEigenvalues[q]);
-  const [l0, l1] = [eig.realEigenvalues[order[0]], eig.realEigenvalues[order[1]]];
+  // ml-matrix's getters copy on every access: read them once.
+  const values = eig.realEigenvalues;
+  const vectors = eig.eigenvectorMatrix;
+  const order = [0, 1, 2].sort((p, q) => values[p] - values[q]);
+  const [l0, l1] = [values[order[0]], values[order[1]]];
   // Two equally small eigenvalues: the pairs do not fix the direction, keep the guess.
   if (l1 - l0 < 1e-3 * Math.max(1e-9, l1)) return undefined;
   const c = order[0];
-  return [eig.eigenvectorMatrix.get(0, c), eig.eigenvectorMatrix.get(1, c), eig.eigenvectorMatrix.get(2, c)];
+  return [vectors.get(0, c), vectors.get(1, c), vectors.get(2, c)];
 }
 
 function addOuter(t: Matrix, v: Vec3, weight: number, identityWeight = 0): void {
