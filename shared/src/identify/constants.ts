@@ -70,3 +70,18 @@ export const PR_PAIR_MAX_HEIGHT_RATIO = 3;
 
 /** Where the library holds a reference spectrum, band agreement becomes (1 − w)·bands + w·max(0, r). */
 export const CORRELATION_WEIGHT = 0.5;
+
+/**
+ * A candidate whose library phases do not include the scan's (a gas in a condensed scan, a solid
+ * in a gas cell) keeps this fraction of its band agreement: it is shown, last among equals, with
+ * the reason. The library's `phases` say where a compound is met, liquefied or dissolved included.
+ */
+export const PHASE_MISMATCH_FACTOR = 0.5;
+
+/**
+ * Escalation needs evidence beyond one coincidence: a candidate whose explained peaks are a single
+ * observed peak escalates only when that peak carries at least this share of the observed
+ * intensity (a one-band salt such as ammonium nitrate in Raman does; ozone matching one ethanol
+ * band in a five-band scan does not). Its caution card is shown either way.
+ */
+export const ESCALATION_SINGLE_PEAK_MIN_SHARE = 0.5;

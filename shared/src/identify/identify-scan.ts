@@ -16,6 +16,7 @@ import {
   MIXTURE_POOL_SIZE,
   PLAUSIBLE_HAZARD_SCORE,
 } from './constants.js';
+import { hasEscalationEvidence } from './escalation-evidence.js';
 import { libraryIndexFor } from './index-cache.js';
 import type { LibraryIndex } from './library-index.js';
 import { findMixture } from './mixture.js';
@@ -46,6 +47,8 @@ function toCandidate(index: LibraryIndex, r: RankedCompound, rank: number, liste
     against: r.against,
     hazards: [cautionCard(c)],
     listedForCaution,
+    phaseMismatch: r.phaseMismatch,
+    escalationEvidence: hasEscalationEvidence(r.explained, r.parts.peaksExplained),
   };
 }
 
@@ -102,7 +105,9 @@ export function identifyScan(input: IdentifyInput, options: IdentifyOptions = {}
   }
   const hazardsOf = new Map(hazardSources.map((c) => [c.id, c.hazards]));
   const listedIds = new Set(candidates.map((c) => c.id));
-  const escalationCandidates = [...candidates, ...(mixture?.components ?? []).filter((m) => !listedIds.has(m.id))].map((c) => ({
+  // A candidate resting on one minor peak keeps its caution card but does not escalate.
+  const escalating = candidates.filter((c) => c.escalationEvidence);
+  const escalationCandidates = [...escalating, ...(mixture?.components ?? []).filter((m) => !listedIds.has(m.id))].map((c) => ({
     id: c.id,
     name: c.name,
     score: c.score,

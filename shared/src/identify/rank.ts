@@ -9,12 +9,15 @@ import { CORRELATION_WEIGHT, DETAIL_POOL_SIZE } from './constants.js';
 import { referenceFor, spectrumCorrelation } from './correlation.js';
 import type { BandTable, LibraryIndex } from './library-index.js';
 import type { ObservedPeaks } from './observed-peaks.js';
+import { phaseFit } from './phase-fit.js';
 import { scoreCandidate, type CandidateScore } from './score-candidate.js';
 import { bandAgreement, bandWindow, closeness, lowerBound } from './scoring.js';
 
 /** A scored compound, by its position in the index. */
 export interface RankedCompound extends CandidateScore {
   readonly index: number;
+  /** Why the compound's library phases argue against the scan's phase; null when they agree. */
+  readonly phaseMismatch: string | null;
 }
 
 /** Upper bounds of band agreement for every compound with at least one band in reach of a peak. */
@@ -100,7 +103,8 @@ function withCorrelation(s: CandidateScore, r: number | null): CandidateScore {
 /**
  * Rank the library for the observed peaks, best first (ties: hazardous compounds first, then id).
  * With the processed scan, candidates of the detail pool that have a reference spectrum in the
- * library also get the full-spectrum correlation.
+ * library also get the full-spectrum correlation. A compound never met in the scan's phase has
+ * its band agreement scaled by the phase factor (the fast pass leaves it out: still an upper bound).
  */
 export function rankLibrary(index: LibraryIndex, obs: ObservedPeaks, toleranceCm1: number, scan?: Spectrum): RankedCompound[] {
   const { touched, upper } = fastPass(index, obs, toleranceCm1);
@@ -108,7 +112,9 @@ export function rankLibrary(index: LibraryIndex, obs: ObservedPeaks, toleranceCm
   const ranked = pool.map((i): RankedCompound => {
     const detailed = scoreCandidate(index.bands[i]!, obs, toleranceCm1, index.technique);
     const reference = scan === undefined ? undefined : referenceFor(index.compounds[i]!.referenceSpectra, index.technique, index.phase);
-    return { index: i, ...withCorrelation(detailed, reference === undefined ? null : spectrumCorrelation(scan!, reference)) };
+    const scored = withCorrelation(detailed, reference === undefined ? null : spectrumCorrelation(scan!, reference));
+    const fit = phaseFit(index.compounds[i]!.phases, index.phase);
+    return { index: i, ...scored, score: scored.score * fit.factor, parts: { ...scored.parts, phaseFactor: fit.factor }, phaseMismatch: fit.reason };
   });
   const hazardous = (i: number) => (index.compounds[i]!.hazards.classifications.length > 0 ? 0 : 1);
   return ranked.sort((a, b) => b.score - a.score || hazardous(a.index) - hazardous(b.index) || index.compounds[a.index]!.id.localeCompare(index.compounds[b.index]!.id));

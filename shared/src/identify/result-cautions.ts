@@ -18,6 +18,10 @@ export function resultCautions(technique: Technique, reliable: boolean, candidat
   if (top !== undefined && hazardousOthers.length > 0) {
     out.push(`Hazardous alternatives are also plausible (${hazardousOthers.map((c) => c.name).join(', ')}): read their caution cards, not only the first candidate's.`);
   }
+  const thin = candidates.filter((c) => !c.escalationEvidence && c.score >= PLAUSIBLE_HAZARD_SCORE && c.hazards.some((h) => h.hazardous));
+  if (thin.length > 0) {
+    out.push(`${thin.map((c) => c.name).join(', ')}: plausible on a single minor band only, so not escalated; read the caution card all the same.`);
+  }
   if (mixture !== null) out.push('The scan looks like a mixture: the hazards of every component apply, and mixtures can react.');
   return out;
 }

@@ -52,6 +52,8 @@ export interface ScoreParts {
   readonly matchedBands: number;
   /** Pearson's r against the library's reference spectrum; null when the library holds none or no scan was given. */
   readonly spectrumCorrelation: number | null;
+  /** Factor for the compound's phases against the scan's: 1, or PHASE_MISMATCH_FACTOR when the library never meets it in that phase. */
+  readonly phaseFactor: number;
 }
 
 /** A candidate's band agreement with its evidence. */
@@ -149,6 +151,7 @@ export function scoreCandidate(bands: CompoundBands, obs: ObservedPeaks, toleran
     expectedBands: bands.expected.length,
     matchedBands: explained.length,
     spectrumCorrelation: null,
+    phaseFactor: 1,
   };
   return { score: bandAgreement(parts.bandsFound, parts.peaksExplained, parts.againstShare), parts, explained, missing, against };
 }

@@ -43,6 +43,13 @@ export interface Candidate {
   readonly hazards: readonly CautionCard[];
   /** Listed beyond the top candidates because it is hazardous and plausible. */
   readonly listedForCaution: boolean;
+  /** Why the compound's library phases argue against the scan's phase (band agreement scaled down); null when they agree. */
+  readonly phaseMismatch: string | null;
+  /**
+   * False when the candidate rests on one minor observed peak: it is then not escalated, though
+   * its caution card is shown (ESCALATION_SINGLE_PEAK_MIN_SHARE).
+   */
+  readonly escalationEvidence: boolean;
 }
 
 /** A mixture of two or three candidates that explains the scan clearly better than any one. */

@@ -13,6 +13,12 @@ export interface QualityOptions {
   minSnr?: number;
   /** Fewest sample peaks for a usable scan. Default 2 for condensed phase, 1 for gas. */
   minPeaks?: number;
+  /**
+   * A scan with fewer than minPeaks peaks is still usable when its tallest peak reaches this
+   * signal-to-noise ratio: a sulfate, nitrate or chlorine Raman scan shows essentially one band.
+   * Default 50 (five times minSnr, an engineering choice: noise alone stays far below it).
+   */
+  singlePeakMinSnr?: number;
 }
 
 /** Options of processScan: one object per step, every field optional except technique and phase. */
@@ -74,8 +80,8 @@ export function resolveProcessOptions(options: ProcessOptions, gridStepCm1: numb
   if (!(transmittanceFloor > 0 && transmittanceFloor < 1)) {
     throw new RangeError(`transmittanceFloor must be between 0 and 1, got ${transmittanceFloor}`);
   }
-  const quality = { minSnr: 10, minPeaks: phase === 'gas' ? 1 : 2, ...options.quality };
-  if (!(quality.minSnr >= 0) || !(quality.minPeaks >= 0)) throw new RangeError('quality thresholds must be ≥ 0');
+  const quality = { minSnr: 10, minPeaks: phase === 'gas' ? 1 : 2, singlePeakMinSnr: 50, ...options.quality };
+  if (!(quality.minSnr >= 0) || !(quality.minPeaks >= 0) || !(quality.singlePeakMinSnr >= 0)) throw new RangeError('quality thresholds must be ≥ 0');
   const window = defaultWindowPoints(gridStepCm1);
   const peaks = { ...DEFAULT_PEAKS, derivativeWindow: window, ...options.peaks };
   if (!(peaks.thresholdSigma > 0)) throw new RangeError(`peaks.thresholdSigma must be positive, got ${peaks.thresholdSigma}`);

@@ -9,6 +9,7 @@ export interface QualityInput {
   readonly technique: Technique;
   readonly minSnr: number;
   readonly minPeaks: number;
+  readonly singlePeakMinSnr: number;
 }
 
 /** Decide whether a processed scan can be used for identification, with a reason for each failure. */
@@ -26,8 +27,12 @@ export function judgeQuality(input: QualityInput): ScanQuality {
         : 'use a thinner layer or less sample';
     reasons.push(`detector saturation: flat top over ${input.saturation.longestRun} points; ${remedy}`);
   }
-  if (input.peaks.length < input.minPeaks) {
-    reasons.push(`too few peaks: ${input.peaks.length} found, at least ${input.minPeaks} needed`);
+  // One clear band is evidence enough for single-band compounds; noise never reaches that SNR.
+  const singleStrongPeak = input.peaks.length >= 1 && snr >= input.singlePeakMinSnr;
+  if (input.peaks.length < input.minPeaks && !singleStrongPeak) {
+    reasons.push(
+      `too few peaks: ${input.peaks.length} found, at least ${input.minPeaks} needed (or one with signal-to-noise ≥ ${input.singlePeakMinSnr})`,
+    );
   }
   return { snr, saturated: input.saturation.saturated, spikesRemoved: input.spikesRemoved, reliable: reasons.length === 0, reasons };
 }

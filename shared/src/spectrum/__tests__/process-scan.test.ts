@@ -45,7 +45,7 @@ describe('processScan, Raman', () => {
     expect(parameters.smoothing.windowSize).toBe(9);
     expect(parameters.spikes.enabled).toBe(true);
     expect(parameters.peaks.threshold).toBeCloseTo(parameters.peaks.thresholdSigma * parameters.peaks.noiseSigma, 12);
-    expect(parameters.quality).toEqual({ minSnr: 10, minPeaks: 2 });
+    expect(parameters.quality).toEqual({ minSnr: 10, minPeaks: 2, singlePeakMinSnr: 50 });
   });
 
   it('says a saturated scan is unreliable', () => {
