@@ -1,3 +1,4 @@
+import 'reflect-metadata';
 import { SampleDataDto } from '../samples/dto/sample-data.dto';
 import { ScanDataDto } from '../scans/dto/scan-data.dto';
 import { validateData } from './validate-data';

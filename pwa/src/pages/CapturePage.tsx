@@ -1,15 +1,78 @@
+import { useState } from 'react';
+import { IonSpinner } from '@ionic/react';
 import { useTranslation } from 'react-i18next';
-import { CautionNote } from '../components/CautionNote';
+import type { IdentifyResult } from '@siteband/shared';
+import { LaserCaution } from '../components/caution/LaserCaution';
 import { PageShell } from '../components/PageShell';
-import { PlaceholderNotice } from '../components/PlaceholderNotice';
+import { InstrumentCheckStatus } from '../components/spectrum/InstrumentCheckStatus';
+import { ScanFilePicker } from '../components/spectrum/ScanFilePicker';
+import { ScanResultPanel } from '../components/spectrum/ScanResultPanel';
+import { ScanSettingsForm } from '../components/spectrum/ScanSettingsForm';
+import { ProcessingPanel } from '../components/spectrum/ProcessingPanel';
+import { identifyClient } from '../features/identify/identifyWorker';
+import type { IdentifyOutcome } from '../features/identify/protocol';
+import { DEFAULT_SCAN_SETTINGS, type ScanSettings } from '../features/identify/scanSettings';
+import { useScanIdentification } from '../features/identify/useScanIdentification';
 
-/** Where the inspector will check the instrument and record scans; built with the capture issue. */
+/**
+ * The inspector's scan screen: how the scan was taken, the instrument's file, then the likely
+ * compounds. Until scans are saved to cases, the acknowledgement lives only on this screen.
+ */
 export default function CapturePage() {
   const { t } = useTranslation();
+  const [scan, setScan] = useState<ScanSettings>(DEFAULT_SCAN_SETTINGS);
+  const { state, processing, setProcessing, chooseFile } = useScanIdentification(identifyClient, scan);
+  const [acknowledgedFor, setAcknowledgedFor] = useState<IdentifyResult | null>(null);
+  const outcome: IdentifyOutcome | null = state.status === 'done' ? state.outcome : state.status === 'running' ? state.previous : null;
+
   return (
     <PageShell title={t('pages.capture.title')}>
-      <PlaceholderNotice>{t('pages.capture.body')}</PlaceholderNotice>
-      <CautionNote laser />
+      <section className="sb-panel" aria-labelledby="scan-heading">
+        <h2 id="scan-heading" className="sb-panel__heading">
+          {t('identify.scan.heading')}
+        </h2>
+        <ScanSettingsForm value={scan} onChange={setScan} />
+        <InstrumentCheckStatus technique={scan.technique} />
+      </section>
+
+      {scan.technique === 'raman' && <LaserCaution />}
+
+      <section className="sb-panel" aria-labelledby="import-heading">
+        <h2 id="import-heading" className="sb-panel__heading">
+          {t('identify.scan.importHeading')}
+        </h2>
+        <ScanFilePicker label={t('identify.file.label')} hint={t('identify.file.hint')} onFile={chooseFile} testId="scan-file" />
+        {state.status === 'running' && (
+          <p className="sb-notice" role="status">
+            <IonSpinner name="crescent" aria-hidden="true" /> {t('identify.scan.running', { file: state.fileName })}
+          </p>
+        )}
+        {state.status === 'failed' && (
+          <div className="sb-error" role="alert" data-testid="scan-error">
+            <p>
+              <strong>{t('identify.scan.failed', { file: state.fileName })}</strong>
+            </p>
+            <p>{state.message}</p>
+            <p>{t('identify.scan.failedHint')}</p>
+          </div>
+        )}
+        {state.status === 'done' && (
+          <p className="sb-muted" role="status">
+            {t('identify.scan.done', { file: state.fileName })}
+          </p>
+        )}
+      </section>
+
+      {outcome && (
+        <>
+          <ProcessingPanel used={outcome.processed.parameters} value={processing} onApply={setProcessing} busy={state.status === 'running'} />
+          <ScanResultPanel
+            outcome={outcome}
+            acknowledged={acknowledgedFor === outcome.result}
+            onAcknowledge={setAcknowledgedFor}
+          />
+        </>
+      )}
     </PageShell>
   );
 }
