@@ -10,6 +10,7 @@ import { useSession } from '../features/session/SessionProvider';
 // loaded after sign-in instead, which keeps it out of the first paint all the same.
 import CasesPage from './CasesPage';
 import CapturePage from './CapturePage';
+import InstrumentCheckPage from './InstrumentCheckPage';
 import ReviewQueuePage from './ReviewQueuePage';
 import LibraryPage from './LibraryPage';
 import StructureCheckPage from './StructureCheckPage';
@@ -20,7 +21,10 @@ import AccountPage from './AccountPage';
 /** The screens of each tab, relative to /tabs; a tab's detail routes sit under its own path. */
 const TAB_ROUTES: Readonly<Record<TabId, readonly { path: string; Page: ComponentType }[]>> = {
   cases: [{ path: 'cases', Page: CasesPage }],
-  capture: [{ path: 'capture', Page: CapturePage }],
+  capture: [
+    { path: 'capture', Page: CapturePage },
+    { path: 'capture/instrument-check', Page: InstrumentCheckPage },
+  ],
   review: [{ path: 'review', Page: ReviewQueuePage }],
   library: [
     { path: 'library', Page: LibraryPage },
