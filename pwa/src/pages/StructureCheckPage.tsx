@@ -1,19 +1,44 @@
+import { useState } from 'react';
 import { IonButton, IonIcon } from '@ionic/react';
 import { arrowBackOutline } from 'ionicons/icons';
+import { useLocation } from 'react-router-dom';
 import { useTranslation } from 'react-i18next';
+import { CautionNote } from '../components/CautionNote';
 import { PageShell } from '../components/PageShell';
-import { PlaceholderNotice } from '../components/PlaceholderNotice';
+import { StructureCheckResult } from '../components/structure/StructureCheckResult';
+import { StructureInputForm } from '../components/structure/StructureInputForm';
+import { StructureProblemAlert } from '../components/structure/StructureProblemAlert';
+import { libraryPaths } from '../features/library/libraryPaths';
+import { useStructureCheck } from '../features/structure/useStructureCheck';
+import type { StructureInput } from '../features/structure/structureWorkerClient';
 
-/** The structure check inside the compound library; the symmetry engine is wired in a later issue. */
+/** The structure check: a pasted or uploaded structure → point group, Γvib and selection rules, computed on the tablet. */
 export default function StructureCheckPage() {
   const { t } = useTranslation();
+  const paths = libraryPaths(useLocation().pathname);
+  const [input, setInput] = useState<StructureInput>();
+  const result = useStructureCheck(input);
   return (
     <PageShell title={t('pages.structure.title')}>
-      <IonButton fill="outline" routerLink="/tabs/library" routerDirection="back" className="sb-back">
+      <IonButton fill="outline" routerLink={paths.list} routerDirection="back" className="sb-back">
         <IonIcon icon={arrowBackOutline} slot="start" aria-hidden="true" />
         {t('pages.structure.back')}
       </IonButton>
-      <PlaceholderNotice>{t('pages.structure.body')}</PlaceholderNotice>
+      <div className="sb-structure-layout sb-structure-layout--split">
+        <section className="sb-panel" aria-labelledby="structure-input-heading">
+          <h2 id="structure-input-heading" className="sb-panel__heading">
+            {t('library.structure.inputHeading')}
+          </h2>
+          <p className="sb-muted">{t('library.structure.intro')}</p>
+          <StructureInputForm onRun={setInput} busy={result.isFetching} />
+        </section>
+        <div aria-live="polite">
+          {result.isError && <StructureProblemAlert error={result.error} />}
+          {result.data && !result.isError && <StructureCheckResult outcome={result.data} />}
+          {!input && <p className="sb-panel sb-muted">{t('library.structure.empty')}</p>}
+        </div>
+      </div>
+      <CautionNote laser />
     </PageShell>
   );
 }
