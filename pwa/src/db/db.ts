@@ -1,10 +1,12 @@
 import Dexie, { type EntityTable } from 'dexie';
 import { instrumentChecksSchema, type InstrumentCheckRow } from './instrumentChecksTable';
+import { libraryCacheSchema, type LibraryCacheRow } from './libraryCacheTable';
 import { sessionSchema, type SessionRow } from './sessionTable';
 
 /** Siteband's on-device database; each later version bump adds its own upgrade step here. */
 export class SitebandDb extends Dexie {
   session!: EntityTable<SessionRow, 'key'>;
+  libraryCache!: EntityTable<LibraryCacheRow, 'key'>;
   instrumentChecks!: EntityTable<InstrumentCheckRow, 'id'>;
 
   constructor(name = 'siteband') {
@@ -14,6 +16,11 @@ export class SitebandDb extends Dexie {
     // Version 2: the instrument checks. A new table starts empty, so no existing row needs an
     // upgrade function; the session table is carried over unchanged.
     this.version(2).stores({ session: sessionSchema, instrumentChecks: instrumentChecksSchema });
+    // Version 3: the compound library as last received from the server. The new table starts empty
+    // and no existing row changes, so the upgrade step only records that nothing needs moving.
+    this.version(3)
+      .stores({ libraryCache: libraryCacheSchema })
+      .upgrade(() => undefined);
   }
 }
 

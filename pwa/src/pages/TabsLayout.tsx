@@ -14,6 +14,8 @@ import InstrumentCheckPage from './InstrumentCheckPage';
 import ReviewQueuePage from './ReviewQueuePage';
 import LibraryPage from './LibraryPage';
 import StructureCheckPage from './StructureCheckPage';
+import CompoundDetailPage from './CompoundDetailPage';
+import CompoundEditPage from './CompoundEditPage';
 import EscalationsPage from './EscalationsPage';
 import UsersPage from './UsersPage';
 import AccountPage from './AccountPage';
@@ -29,10 +31,19 @@ const TAB_ROUTES: Readonly<Record<TabId, readonly { path: string; Page: Componen
   library: [
     { path: 'library', Page: LibraryPage },
     { path: 'library/structure', Page: StructureCheckPage },
+    { path: 'library/new', Page: CompoundEditPage },
+    { path: 'library/:id', Page: CompoundDetailPage },
+    { path: 'library/:id/edit', Page: CompoundEditPage },
   ],
   escalations: [{ path: 'escalations', Page: EscalationsPage }],
   users: [{ path: 'users', Page: UsersPage }],
-  account: [{ path: 'account', Page: AccountPage }],
+  account: [
+    { path: 'account', Page: AccountPage },
+    // Every role reads the compound library and runs structure checks here; only supervisors curate.
+    { path: 'account/library', Page: LibraryPage },
+    { path: 'account/library/structure', Page: StructureCheckPage },
+    { path: 'account/library/:id', Page: CompoundDetailPage },
+  ],
 };
 
 /** The signed-in shell: only the tabs of the person's role, each with its own navigation stack. */

@@ -1,0 +1,29 @@
+import { validateCompound, type Compound, type Library } from '@siteband/shared';
+import { useDebounced } from '../structure/useDebounced';
+import { useStructureCheck } from '../structure/useStructureCheck';
+import { entryFromDraft, type CompoundDraft } from './compoundDraft';
+import { gammaVibProblems } from './gammaVibCheck';
+
+/** Pause after the last key before the geometry is checked again. */
+const TYPING_PAUSE_MS = 400;
+
+/**
+ * Everything the editor checks before a save: the library's own entry validation, and for a
+ * geometry the structure check with the fundamentals' labels against its Γvib.
+ */
+export function useCompoundValidation(draft: CompoundDraft | undefined, base: Compound | undefined, library: Library | undefined) {
+  const xyz = useDebounced(draft?.xyz ?? '', TYPING_PAUSE_MS);
+  const structure = useStructureCheck(base?.geometry ? { text: xyz, convention: draft?.convention ?? 'yz' } : undefined);
+  if (!draft || !base || !library) return { entry: undefined, entryError: null, structure, problems: [], ready: false };
+  const entry = entryFromDraft(draft, base);
+  let entryError: string | null = null;
+  let validated: Compound | undefined;
+  try {
+    validated = validateCompound(entry, new Set(Object.keys(library.sources)));
+  } catch (error) {
+    entryError = error instanceof Error ? error.message : String(error);
+  }
+  const problems = validated?.fundamentals && structure.data ? gammaVibProblems(validated.fundamentals, structure.data.check.vibrations.modes) : [];
+  const geometryOk = !base.geometry || (structure.data !== undefined && !structure.isError && xyz === draft.xyz);
+  return { entry, entryError, structure, problems, ready: entryError === null && problems.length === 0 && geometryOk };
+}
