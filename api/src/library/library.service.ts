@@ -1,8 +1,7 @@
 import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { loadLibrary, validateCompound, type Compound } from '@siteband/shared';
+import { geometryProblems, loadLibrary, validateCompound, type Compound } from '@siteband/shared';
 import { QueryFailedError, type Repository } from 'typeorm';
-import { geometryProblems } from './geometry-check';
 import { LibraryEdit } from './library-edit.entity';
 import type { CurrentEdit } from './library-version';
 import { mergeLibrary, type CurrentLibrary } from './merge-library';

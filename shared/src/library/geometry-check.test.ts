@@ -1,5 +1,7 @@
-import { loadLibrary, type Compound } from '@siteband/shared';
-import { geometryProblems } from './geometry-check';
+import { describe, expect, it } from 'vitest';
+import { loadLibrary } from './load.js';
+import type { Compound } from './types.js';
+import { geometryProblems } from './geometry-check.js';
 
 const bundled = (id: string): Compound => loadLibrary().compounds.find((c) => c.id === id)!;
 const withFundamentals = (c: Compound, fundamentals: Compound['fundamentals']): Compound => ({ ...c, fundamentals });

@@ -1,4 +1,7 @@
-import { engineAnalyser, pointGroup, type Compound, type MoleculeSymmetry, type SymmetryAnalyser } from '@siteband/shared';
+import { pointGroup } from '../symmetry/catalogue.js';
+import type { Compound } from './types.js';
+import { engineAnalyser } from './engine-analyser.js';
+import type { MoleculeSymmetry, SymmetryAnalyser } from './symmetry-source.js';
 
 /**
  * Why a compound's fundamentals and labelled bands disagree with the symmetry engine, one sentence

@@ -6,3 +6,4 @@ export { validateLibrary, type Library } from './validate-library.js';
 export { loadLibrary } from './load.js';
 export { cachedAnalyser, type MoleculeSymmetry, type SpeciesActivity, type SymmetryAnalyser } from './symmetry-source.js';
 export { engineAnalyser } from './engine-analyser.js';
+export { geometryProblems } from './geometry-check.js';
