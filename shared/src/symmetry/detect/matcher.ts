@@ -56,13 +56,20 @@ export class AtomMatcher {
           for (const j of this.grid.get(this.key(ix, iy, iz)) ?? []) {
             if (this.kinds[j] !== this.kinds[i]) continue;
             const p = this.positions[j];
-            const d = Math.hypot(p[0] - q[0], p[1] - q[1], p[2] - q[2]);
-            if (d < distance) [index, distance] = [j, d];
+            const dx = p[0] - q[0];
+            const dy = p[1] - q[1];
+            const dz = p[2] - q[2];
+            // Squared distances in the loop (Math.hypot is slow in V8); one square root at the end.
+            const d2 = dx * dx + dy * dy + dz * dz;
+            if (d2 < distance) {
+              index = j;
+              distance = d2;
+            }
           }
         }
       }
     }
-    this.lastDistance = distance;
+    this.lastDistance = Math.sqrt(distance);
     return index;
   }
 

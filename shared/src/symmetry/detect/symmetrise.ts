@@ -8,10 +8,11 @@ import type { Mat3 } from '../types.js';
  * (permutations[k][i] = the atom that operation k sends atom i to).
  */
 export function symmetrisePositions(positions: readonly Vec3[], operations: readonly Mat3[], permutations: readonly (readonly number[])[]): Vec3[] {
+  const inverses = operations.map(transpose);
   return positions.map((_, i) => {
     const sum = [0, 0, 0];
-    operations.forEach((op, k) => {
-      const back = apply(transpose(op), positions[permutations[k][i]]);
+    inverses.forEach((inverse, k) => {
+      const back = apply(inverse, positions[permutations[k][i]]);
       for (let c = 0; c < 3; c++) sum[c] += back[c];
     });
     return sum.map((v) => v / operations.length) as unknown as Vec3;

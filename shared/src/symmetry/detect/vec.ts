@@ -11,7 +11,7 @@ export const cross = (a: Vec3, b: Vec3): Vec3 => [a[1] * b[2] - a[2] * b[1], a[2
 export const addScaled = (a: Vec3, b: Vec3, s: number): Vec3 => [a[0] + s * b[0], a[1] + s * b[1], a[2] + s * b[2]];
 
 /** Euclidean length. */
-export const norm = (a: Vec3): number => Math.hypot(a[0], a[1], a[2]);
+export const norm = (a: Vec3): number => Math.sqrt(a[0] * a[0] + a[1] * a[1] + a[2] * a[2]);
 
 /** Unit vector along a, or undefined when a is (numerically) zero. */
 export function unit(a: Vec3, minLength = 1e-8): Vec3 | undefined {
