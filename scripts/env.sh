@@ -9,5 +9,23 @@ export DB_NAME="${DB_NAME:-siteband}"
 export DB_USER="${DB_USER:-siteband}"
 export DB_PASSWORD="${DB_PASSWORD:-siteband-local}"
 export SITEBAND_DATA_DIR="${SITEBAND_DATA_DIR:-$ROOT/.data}"
+export S3_PORT="${S3_PORT:-4569}"
+export S3_BUCKET="${S3_BUCKET:-siteband-dev}"
 export SITEBAND_DEMO_PASSWORD="${SITEBAND_DEMO_PASSWORD:-siteband-demo-2026}"
 export MARIADB_DIR="${MARIADB_DIR:-$SITEBAND_DATA_DIR/mariadb-$DB_PORT}"
+
+# Starts the local S3 fake on $S3_PORT in the background and waits for it; sets s3_pid.
+start_s3_fake() {
+  local log="$SITEBAND_DATA_DIR/s3-$S3_PORT.log"
+  mkdir -p "$SITEBAND_DATA_DIR"
+  node "$ROOT/scripts/fakes/s3.mjs" --port "$S3_PORT" --bucket "$S3_BUCKET" >"$log" 2>&1 &
+  s3_pid=$!
+  for _ in $(seq 1 100); do
+    grep -q "ready" "$log" 2>/dev/null && return 0
+    kill -0 "$s3_pid" 2>/dev/null || break
+    sleep 0.1
+  done
+  echo "The S3 fake did not start; see $log" >&2
+  cat "$log" >&2
+  return 1
+}

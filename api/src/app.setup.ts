@@ -1,4 +1,5 @@
 import type { NestExpressApplication } from '@nestjs/platform-express';
+import { JSON_BODY_LIMIT_BYTES } from './common/body-limit';
 import { createSpaMiddleware } from './common/spa';
 import { ApiExceptionFilter } from './common/api-exception.filter';
 import { setupOpenApi } from './common/openapi';
@@ -22,10 +23,11 @@ export function configureApp(app: NestExpressApplication): NestExpressApplicatio
   // Order matters: the request id must exist before anything can fail.
   app.use(createRequestLogger(config.logLevel));
   app.use(createSecurityHeaders());
+  app.useBodyParser('json', { limit: JSON_BODY_LIMIT_BYTES });
   app.enableCors({
     origin: config.corsOrigins,
     methods: ['GET', 'HEAD', 'POST', 'PATCH', 'PUT', 'DELETE'],
-    allowedHeaders: ['Authorization', 'Content-Type', 'X-Request-Id'],
+    allowedHeaders: ['Authorization', 'Content-Type', 'Content-Range', 'X-Request-Id'],
     exposedHeaders: ['X-Request-Id', 'Retry-After'],
     maxAge: 600,
   });

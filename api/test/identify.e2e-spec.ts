@@ -2,6 +2,7 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { DEFAULT_MAX_IMPORT_BYTES, identifySpectrum, importSpectrum, loadLibrary, ROLES, type Role } from '@siteband/shared';
 import { DEMO, expectErrorShape, signIn, startTestApp, type TestApp } from './support/test-app';
+import { JSON_BODY_LIMIT_BYTES } from '../src/common/body-limit';
 
 const FIXTURES = join(__dirname, '../../fixtures/spectra');
 const read = (name: string) => readFileSync(join(FIXTURES, name));
@@ -151,7 +152,8 @@ describe('Identification (e2e, MariaDB)', () => {
     const huge = Buffer.alloc(DEFAULT_MAX_IMPORT_BYTES + 1, 0x30);
     const response = await upload('inspector', huge, 'huge.csv').expect(413);
     expectErrorShape(response.body, 413, '/api/identify');
-    const points = Array.from({ length: 20000 }, (_, i) => 400 + i * 0.18);
+    // A JSON spectrum beyond the JSON body limit (at least 10 bytes a point pair).
+    const points = Array.from({ length: Math.ceil(JSON_BODY_LIMIT_BYTES / 10) }, (_, i) => 400 + i * 0.0018);
     const json = await t.http().post('/api/identify').set(as('inspector')).send({ technique: 'ir', phase: 'condensed', spectrum: { xCm1: points, y: points, ordinate: 'absorbance' } });
     expect(json.status).toBe(413);
     expectErrorShape(json.body, 413, '/api/identify');
