@@ -43,7 +43,10 @@ export function classify(s: PreparedStructure, m: AtomMatcher, convention: Plana
   if (cubic) return cubic;
 
   // The principal axis: the highest-order rotation among the inertia axes and the C2 axes.
-  const found = [...s.axes, ...c2].map((a) => rotationOrder(s, m, a));
+  // A Cn with n ≥ 3 is the unique inertia axis; C2 axes are searched for higher orders only when
+  // no inertia axis has one (an accidentally degenerate top).
+  const principal = s.axes.map((a) => rotationOrder(s, m, a));
+  const found = principal.some((f) => f.n >= 3) ? principal : [...principal, ...c2.map((a) => rotationOrder(s, m, a))];
   const n = Math.max(...found.map((f) => f.n));
   if (n === 1) return lowSymmetry(s, mirrors, inversion, tol);
   let main = found.filter((f) => f.n === n).map((f) => f.axis);

@@ -1,7 +1,6 @@
 /** The structure check's first step: which point group a structure has, and the structure in its standard orientation. */
 import type { Atom, Mat3, PlanarConvention, Structure, Vec3 } from '../types.js';
-import { apply, mul } from '../mat3.js';
-import { polishFrame } from './align.js';
+import { orientAndVerify } from './orient.js';
 import { prepareStructure } from './prepare.js';
 import { AtomMatcher } from './matcher.js';
 import { classify } from './classify.js';
@@ -69,29 +68,10 @@ export function detectPointGroup(structure: Structure, options: DetectOptions = 
   const prepared = prepareStructure(structure, tolerance);
   const matcher = new AtomMatcher(prepared.positions, prepared.kinds, tolerance, prepared.classes.flat());
   const { name, x, y, z } = classify(prepared, matcher, convention);
-  const frameRotation: Mat3 = [...x, ...y, ...z] as unknown as Mat3;
   const ops = standardOperations(name);
   const matrices = ops.map((o) => o.matrix);
-
-  // Polish the frame when every operation already finds partners at the loose distance.
-  const framed = prepared.positions.map((p) => apply(frameRotation, p));
-  const loose = new AtomMatcher(framed, prepared.kinds, tolerance).permutationsFor(matrices);
-  const rotation = loose ? mul(polishFrame(framed, matrices, loose), frameRotation) : frameRotation;
-
-  const orientedPositions = prepared.positions.map((p) => apply(rotation, p));
-  const oriented = new AtomMatcher(orientedPositions, prepared.kinds, tolerance);
-  const permutations: number[][] = [];
-  let maxDeviation = 0;
-  for (const op of matrices) {
-    const { permutation, maxDeviation: d } = oriented.permutation(op);
-    maxDeviation = Math.max(maxDeviation, d);
-    if (!permutation || d > tolerance) {
-      throw new RangeError(
-        `the structure is only approximately ${name}: an operation moves an atom ${d.toFixed(3)} Å from its partner (tolerance ${tolerance} Å); check the geometry or change the tolerance`,
-      );
-    }
-    permutations.push(permutation);
-  }
+  const frame: Mat3 = [...x, ...y, ...z] as unknown as Mat3;
+  const { rotation, positions: orientedPositions, permutations, maxDeviation } = orientAndVerify(prepared.positions, prepared.kinds, frame, matrices, name, tolerance);
   const symmetrised = options.symmetrise === true;
   const finalPositions = symmetrised ? symmetrisePositions(orientedPositions, matrices, permutations) : orientedPositions;
   const linear = name === 'C∞v' || name === 'D∞h';

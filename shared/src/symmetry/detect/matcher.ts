@@ -102,14 +102,19 @@ export class AtomMatcher {
     return { permutation: valid ? permutation : undefined, maxDeviation };
   }
 
-  /** Permutations for every operation at the loose distance, or undefined if any operation has none. */
-  permutationsFor(operations: readonly Mat3[]): number[][] | undefined {
-    const out: number[][] = [];
+  /**
+   * Permutations for every operation (partners within LOOSE × tolerance) and the largest miss;
+   * permutations is undefined if some operation leaves an atom without a partner.
+   */
+  permutationsFor(operations: readonly Mat3[]): { permutations: number[][] | undefined; maxDeviation: number } {
+    const permutations: number[][] = [];
+    let maxDeviation = 0;
     for (const op of operations) {
-      const { permutation } = this.permutation(op);
-      if (!permutation) return undefined;
-      out.push(permutation);
+      const { permutation, maxDeviation: d } = this.permutation(op);
+      maxDeviation = Math.max(maxDeviation, d);
+      if (!permutation) return { permutations: undefined, maxDeviation };
+      permutations.push(permutation);
     }
-    return out;
+    return { permutations, maxDeviation };
   }
 }
