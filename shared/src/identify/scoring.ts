@@ -21,14 +21,4 @@ export function bandAgreement(bandsFound: number, peaksExplained: number, agains
   return base * Math.max(0, 1 - AGAINST_PENALTY * againstShare);
 }
 
-/** Index of the first element of a sorted array that is ≥ value. */
-export function lowerBound(sorted: ArrayLike<number>, value: number): number {
-  let lo = 0;
-  let hi = sorted.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >>> 1;
-    if (sorted[mid]! < value) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
-}
+export { lowerBound } from '../spectrum/search.js';

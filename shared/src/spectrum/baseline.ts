@@ -1,6 +1,5 @@
 import airPLS from 'ml-airpls';
-import { arplsBaseline } from './arpls.js';
-import { blockMeans, expandBlocks } from './decimate.js';
+import { decimatedArpls, keepBroadBands } from './broad-bands.js';
 
 /** Options of {@link estimateBaseline}. */
 export interface BaselineOptions {
@@ -25,16 +24,26 @@ export interface BaselineOptions {
    * far smoother than the grid). Default 2048.
    */
   maxPoints?: number;
+  /**
+   * arpls only: a wavenumber window where broad sample bands are expected, [from, to] cm⁻¹, or
+   * null for none. Inside it the baseline never rises above a second, stiffer fit
+   * (broadBandLambda), so a broad hydrogen-bonded X–H stretch is not taken for background.
+   */
+  broadBandWindowCm1?: readonly [number, number] | null;
+  /** Stiffness of that second fit, at a 1 cm⁻¹ grid like lambda. */
+  broadBandLambda?: number;
 }
 
 /**
  * Baseline defaults per technique, chosen on synthetic scans: IR has broad bands (O–H stretches
- * 100–250 cm⁻¹ wide keep ≥ 85 % of their height) on gentle slopes, so a stiff baseline; Raman
- * bands are narrow on fluorescence up to ~100 times taller than the bands, so it must bend more.
+ * 100–400 cm⁻¹ wide keep ≥ 85 % of their height) on gentle slopes, so a stiff baseline; Raman
+ * bands are narrow on fluorescence up to ~100 times taller than the bands, so it must bend more,
+ * except in the X–H stretching window 2800–3800 cm⁻¹ where hydrogen-bonded O–H and N–H
+ * stretches of water, aqueous solutions and hydroxides are broad (common practice).
  */
 export const DEFAULT_BASELINE = {
-  ir: { method: 'arpls', lambda: 1e7, maxIterations: 50, tolerance: 0.001, maxPoints: 2048 },
-  raman: { method: 'arpls', lambda: 1e4, maxIterations: 50, tolerance: 0.001, maxPoints: 2048 },
+  ir: { method: 'arpls', lambda: 1e7, maxIterations: 50, tolerance: 0.001, maxPoints: 2048, broadBandWindowCm1: null, broadBandLambda: 1e7 },
+  raman: { method: 'arpls', lambda: 1e4, maxIterations: 50, tolerance: 0.001, maxPoints: 2048, broadBandWindowCm1: [2800, 3800], broadBandLambda: 1e7 },
 } as const satisfies Record<string, Required<BaselineOptions>>;
 
 /** Estimate a baseline under the bands and subtract it. */
@@ -54,11 +63,14 @@ export function estimateBaseline(
   let baseline: Float64Array;
   let iterations: number;
   if (options.method === 'arpls') {
-    const factor = Math.ceil(y.length / options.maxPoints);
-    // On the coarser grid the step is factor times larger, hence λ / factor⁴.
-    const fit = arplsBaseline(factor > 1 ? blockMeans(y, factor) : y, lambda / factor ** 4, options.maxIterations, options.tolerance);
-    baseline = factor > 1 ? expandBlocks(fit.baseline, factor, y.length) : fit.baseline;
+    const fit = decimatedArpls(y, lambda, options.maxPoints, options.maxIterations, options.tolerance);
+    baseline = fit.baseline;
     iterations = fit.iterations;
+    if (options.broadBandWindowCm1) {
+      if (!(options.broadBandLambda > 0)) throw new RangeError(`baseline broadBandLambda must be positive, got ${options.broadBandLambda}`);
+      const { maxIterations, tolerance } = options;
+      keepBroadBands(xCm1, y, baseline, { windowCm1: options.broadBandWindowCm1, lambda: options.broadBandLambda / stepCm1 ** 4, maxIterations, tolerance });
+    }
   } else {
     const result = airPLS(Array.from(xCm1), Array.from(y), {
       lambda,
