@@ -43,6 +43,10 @@ export interface SyntheticOptions {
   readonly dropWeak?: number;
   /** Noise σ relative to the tallest band (default 0.004). */
   readonly noise?: number;
+  /** IR: record as a diamond ATR accessory would, absorbance × 1000 cm⁻¹ / ν (what processScan's ATR correction undoes). */
+  readonly atr?: boolean;
+  /** Raman: a broad fluorescence hump this many times the tallest band (default 0). */
+  readonly fluorescence?: number;
 }
 
 /** A synthetic spectrum for one or more components (IR as absorbance, Raman as intensity). */
@@ -67,6 +71,12 @@ export function syntheticSpectrum(components: readonly SyntheticComponent[], opt
   const a = 0.2 * random() * tallest;
   const slope = (0.5 * random() - 0.2) * tallest;
   const sigma = (options.noise ?? 0.004) * tallest;
-  for (let i = 0; i < AXIS_POINTS; i++) y[i] += a + (slope * (axisCm1[i]! - 100)) / 3900 + sigma * gaussian(random);
+  const hump = (options.fluorescence ?? 0) * tallest;
+  const humpCentre = 1000 + 1000 * random();
+  for (let i = 0; i < AXIS_POINTS; i++) {
+    const x = axisCm1[i]!;
+    if (options.atr) y[i] = (y[i]! * 1000) / x;
+    y[i] += a + (slope * (x - 100)) / 3900 + hump * Math.exp(-(((x - humpCentre) / 1500) ** 2)) + sigma * gaussian(random);
+  }
   return { xCm1: axisCm1, y, ordinate: options.technique === 'ir' ? 'absorbance' : 'intensity', technique: options.technique, title: 'synthetic (invented) scan' };
 }
