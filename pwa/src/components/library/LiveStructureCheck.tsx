@@ -1,22 +1,14 @@
-import type { TFunction } from 'i18next';
 import { useTranslation } from 'react-i18next';
-import type { GammaVibProblem } from '../../features/library/gammaVibCheck';
 import { gammaFormula } from '../../features/structure/gammaFormula';
 import type { StructureOutcome } from '../../features/structure/structureWorkerClient';
 import { StructureProblemAlert } from '../structure/StructureProblemAlert';
-
-function problemText(t: TFunction, p: GammaVibProblem): string {
-  if (p.kind === 'count') return t('library.editor.problemCount', { ...p });
-  if (p.kind === 'unknown-label') return t('library.editor.problemLabel', { ...p });
-  return t('library.editor.problemInactive', { ...p, technique: p.technique === 'ir' ? 'IR' : 'Raman' });
-}
 
 /** The edited geometry's point group and Γvib, and whether the fundamentals' labels match it. */
 export function LiveStructureCheck({ outcome, error, running, problems }: {
   outcome: StructureOutcome | undefined;
   error: Error | null;
   running: boolean;
-  problems: readonly GammaVibProblem[];
+  problems: readonly string[];
 }) {
   const { t } = useTranslation();
   return (
@@ -37,8 +29,8 @@ export function LiveStructureCheck({ outcome, error, running, problems }: {
             </p>
           ) : (
             <ul className="sb-error" data-testid="labels-mismatch">
-              {problems.map((p, i) => (
-                <li key={i}>{problemText(t, p)}</li>
+              {problems.map((p) => (
+                <li key={p}>{p}</li>
               ))}
             </ul>
           )}

@@ -1,8 +1,8 @@
-import { validateCompound, type Compound, type Library } from '@siteband/shared';
+import { geometryProblems, validateCompound, type Compound, type Library } from '@siteband/shared';
 import { useDebounced } from '../structure/useDebounced';
 import { useStructureCheck } from '../structure/useStructureCheck';
 import { entryFromDraft, type CompoundDraft } from './compoundDraft';
-import { gammaVibProblems } from './gammaVibCheck';
+import { analyserFromCheck } from './workerAnalyser';
 
 /** Pause after the last key before the geometry is checked again. */
 const TYPING_PAUSE_MS = 400;
@@ -14,7 +14,7 @@ const TYPING_PAUSE_MS = 400;
 export function useCompoundValidation(draft: CompoundDraft | undefined, base: Compound | undefined, library: Library | undefined) {
   const xyz = useDebounced(draft?.xyz ?? '', TYPING_PAUSE_MS);
   const structure = useStructureCheck(base?.geometry ? { text: xyz, convention: draft?.convention ?? 'yz' } : undefined);
-  if (!draft || !base || !library) return { entry: undefined, entryError: null, structure, problems: [], ready: false };
+  if (!draft || !base || !library) return { entry: undefined, entryError: null, structure, problems: [] as string[], ready: false };
   const entry = entryFromDraft(draft, base);
   let entryError: string | null = null;
   let validated: Compound | undefined;
@@ -23,7 +23,7 @@ export function useCompoundValidation(draft: CompoundDraft | undefined, base: Co
   } catch (error) {
     entryError = error instanceof Error ? error.message : String(error);
   }
-  const problems = validated?.fundamentals && structure.data ? gammaVibProblems(validated.fundamentals, structure.data.check.vibrations.modes) : [];
+  const problems = validated && structure.data && xyz === draft.xyz ? geometryProblems(validated, analyserFromCheck(structure.data.check)) : [];
   const geometryOk = !base.geometry || (structure.data !== undefined && !structure.isError && xyz === draft.xyz);
   return { entry, entryError, structure, problems, ready: entryError === null && problems.length === 0 && geometryOk };
 }

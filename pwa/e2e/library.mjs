@@ -1,0 +1,162 @@
+// Browser end-to-end tests of the structure check and the compound library against a running server.
+// Registered in run.mjs; the same launch and sign-in helpers as the shell tests.
+import assert from 'node:assert/strict';
+import { after, before, describe, it } from 'node:test';
+import { blockingViolations } from './axe.mjs';
+import { openBrowser, screenshot } from './browser.mjs';
+import { openTab, signInTo, signOut, waitForPage, waitForServiceWorker } from './shell.mjs';
+
+// Ammonia near its experimental shape (pyramidal, N–H about 1 Å): C3v, Γvib = 2A1 + 2E.
+const AMMONIA = ['4', 'ammonia', 'N 0 0 0.1', 'H 0.94 0 -0.27', 'H -0.47 0.814 -0.27', 'H -0.47 -0.814 -0.27'].join('\n');
+// The same file with a coordinate that is not a number on line 5.
+const BROKEN = AMMONIA.replace('H -0.47 0.814 -0.27', 'H -0.47 north -0.27');
+
+async function assertAccessible(page, where) {
+  assert.deepEqual(await blockingViolations(page), [], `axe found serious or critical problems on ${where}`);
+}
+
+/** Pastes a structure into the structure check and runs it. */
+async function runStructure(page, text) {
+  await page.getByLabel('Structure text (XYZ or MOL)').last().fill(text);
+  await page.getByRole('button', { name: 'Run the structure check' }).last().click();
+}
+
+/** Waits for the point group the structure check shows and returns the numbers beside it. */
+async function readStructureResult(page, group) {
+  const result = page.getByTestId('structure-point-group').last();
+  await page.waitForFunction(
+    (expected) => [...document.querySelectorAll('[data-testid="structure-point-group"]')].some((n) => n.textContent.trim() === expected),
+    group,
+    { timeout: 20_000 },
+  );
+  const text = async (id) => (await page.getByTestId(id).last().textContent()).trim();
+  return {
+    group: (await result.textContent()).trim(),
+    gamma: await text('structure-gamma-vib'),
+    ir: await text('count-ir'),
+    raman: await text('count-raman'),
+  };
+}
+
+/** Registers the structure check and compound library tests against the server at baseUrl. */
+export function libraryTests({ baseUrl: BASE_URL, password: PASSWORD }) {
+  describe('structure check and compound library', { concurrency: false }, () => {
+    let browser;
+    before(async () => {
+      browser = await openBrowser({ origin: BASE_URL });
+    });
+    after(async () => {
+      await browser?.close();
+    });
+
+    it('checks ammonia in the browser: C3v, 2A1 + 2E, 4 IR and 4 Raman active', async () => {
+      const { page } = browser;
+      await signInTo(page, BASE_URL, 'supervisor@demo.test', PASSWORD, 'Review queue');
+      await openTab(page, 'Compound library');
+      await page.getByText('Open the structure check').click();
+      await waitForPage(page, 'Structure check');
+      await runStructure(page, AMMONIA);
+      const result = await readStructureResult(page, 'C3v');
+      assert.equal(result.gamma, '2A1 + 2E');
+      assert.match(result.ir, /^4\s*IR active$/);
+      assert.match(result.raman, /^4\s*Raman active$/);
+      const characterRows = await page.getByTestId('character-table').last().locator('tbody tr').count();
+      assert.equal(characterRows, 3, 'C3v has three irreps: A1, A2, E');
+      await assertAccessible(page, 'the structure check with a result');
+      await screenshot(page, 'supervisor-structure-check-ammonia');
+    });
+
+    it('names the line of a malformed XYZ file in an alert', async () => {
+      const { page } = browser;
+      await runStructure(page, BROKEN);
+      const alert = page.getByTestId('structure-error').last();
+      await alert.waitFor();
+      assert.equal(await alert.getAttribute('role'), 'alert');
+      assert.match(await alert.textContent(), /line 5/);
+      await assertAccessible(page, 'the structure check with an error');
+      await screenshot(page, 'supervisor-structure-check-error');
+    });
+
+    it('runs the structure check again without a network', async () => {
+      const { page, context } = browser;
+      await waitForServiceWorker(page);
+      await context.setOffline(true);
+      try {
+        await page.reload();
+        await waitForPage(page, 'Structure check');
+        assert.equal((await page.getByTestId('connection-status').last().textContent()).trim(), 'Offline');
+        await runStructure(page, AMMONIA);
+        const result = await readStructureResult(page, 'C3v');
+        assert.equal(result.gamma, '2A1 + 2E');
+        await screenshot(page, 'offline-structure-check');
+      } finally {
+        await context.setOffline(false);
+      }
+    });
+
+    it('finds chlorine and shows its pictograms, H-statements and caution card', async () => {
+      const { page } = browser;
+      await page.goto(`${BASE_URL}/tabs/library`);
+      await waitForPage(page, 'Compound library');
+      await page.getByTestId('library-version').last().filter({ hasText: 'from the server' }).waitFor();
+      await page.getByLabel('Search by name, synonym, CAS RN or formula').last().fill('chlorine');
+      await page.getByTestId('compound-chlorine').last().waitFor();
+      await assertAccessible(page, 'the compound library');
+      await screenshot(page, 'supervisor-library-search');
+      await page.getByTestId('compound-chlorine').last().click();
+      await waitForPage(page, 'Chlorine');
+      const card = page.getByTestId('compound-caution-card').last();
+      const pictograms = card.locator('.sb-pictogram');
+      assert.equal(await pictograms.count(), 4, 'chlorine carries GHS03, GHS04, GHS06 and GHS09');
+      assert.ok(await pictograms.filter({ hasText: 'GHS06' }).isVisible());
+      const cardText = await card.textContent();
+      assert.match(cardText, /H330/, 'the H-statements are listed');
+      assert.match(cardText, /Danger/, 'the signal word is shown');
+      assert.match(await page.locator('.sb-caution').last().textContent(), /presumptive/);
+      // The activity beside each fundamental comes from the structure check in the worker.
+      await page.waitForFunction(() => {
+        const cells = [...document.querySelectorAll('[data-testid^="activity-"]')];
+        return cells.length > 0 && cells.every((c) => c.textContent.trim() !== 'checking…');
+      }, undefined, { timeout: 20_000 });
+      await assertAccessible(page, 'the chlorine detail page');
+      await screenshot(page, 'supervisor-compound-chlorine');
+    });
+
+    it("lets a supervisor change chlorine's synonyms, and the change survives a reload", async () => {
+      const { page } = browser;
+      const synonym = `field code Cl-${Date.now() % 100000}`;
+      await page.getByTestId('edit-compound').last().click();
+      await waitForPage(page, 'Edit Chlorine');
+      const box = page.getByLabel('Synonyms', { exact: true }).last();
+      const before = await box.inputValue();
+      await box.fill(`${before}\n${synonym}`);
+      await page.getByTestId('labels-match').last().waitFor({ timeout: 20_000 });
+      await assertAccessible(page, 'the compound editor');
+      await screenshot(page, 'supervisor-compound-editor');
+      await page.getByRole('button', { name: 'Save compound' }).last().click();
+      await waitForPage(page, 'Chlorine');
+      await page.getByTestId('compound-synonyms').last().filter({ hasText: synonym }).waitFor();
+      await page.reload();
+      await waitForPage(page, 'Chlorine');
+      await page.getByTestId('compound-synonyms').last().filter({ hasText: synonym }).waitFor();
+      await signOut(page);
+    });
+
+    it('shows the library read-only to an inspector, from the account tab', async () => {
+      const { page } = browser;
+      await signInTo(page, BASE_URL, 'inspector@demo.test', PASSWORD, 'Cases');
+      await page.goto(`${BASE_URL}/tabs/account/library/chlorine`);
+      await waitForPage(page, 'Chlorine');
+      assert.equal(await page.getByTestId('edit-compound').count(), 0, 'no edit button for an inspector');
+      assert.equal(await page.getByRole('button', { name: 'Retire compound' }).count(), 0);
+      await assertAccessible(page, 'the chlorine detail page for an inspector');
+      await screenshot(page, 'inspector-compound-chlorine');
+      // The supervisor's editor route is not in the inspector's shell at all.
+      await page.goto(`${BASE_URL}/tabs/library/chlorine/edit`);
+      await waitForPage(page, 'Cases');
+      await signOut(page);
+      assert.deepEqual(browser.foreignRequests, [], 'no request left the server');
+      assert.deepEqual(browser.pageErrors, [], 'no script error');
+    });
+  });
+}
