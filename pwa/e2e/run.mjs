@@ -4,6 +4,7 @@ import assert from 'node:assert/strict';
 import { after, before, describe, it } from 'node:test';
 import { blockingViolations } from './axe.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
+import { libraryTests } from './library.mjs';
 import {
   ageStoredSession,
   openTab,
@@ -282,3 +283,5 @@ describe('offline', { concurrency: false }, () => {
     await signInTo(page, BASE_URL, 'inspector@demo.test', PASSWORD, 'Cases');
   });
 });
+
+libraryTests({ baseUrl: BASE_URL, password: PASSWORD });
