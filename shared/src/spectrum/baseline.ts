@@ -21,7 +21,7 @@ export interface BaselineOptions {
   /**
    * arpls only: scans with more points are block-averaged to at most this many before fitting
    * and the baseline is interpolated back, which keeps a 4,096-point scan fast (the baseline is
-   * far smoother than the grid). Default 2048.
+   * far smoother than the grid). Default 1024 (about 3.5 cm⁻¹ per point on a 4,096-point mid-IR scan).
    */
   maxPoints?: number;
   /**
@@ -42,8 +42,8 @@ export interface BaselineOptions {
  * stretches of water, aqueous solutions and hydroxides are broad (common practice).
  */
 export const DEFAULT_BASELINE = {
-  ir: { method: 'arpls', lambda: 1e7, maxIterations: 50, tolerance: 0.001, maxPoints: 2048, broadBandWindowCm1: null, broadBandLambda: 1e7 },
-  raman: { method: 'arpls', lambda: 1e4, maxIterations: 50, tolerance: 0.001, maxPoints: 2048, broadBandWindowCm1: [2800, 3800], broadBandLambda: 1e7 },
+  ir: { method: 'arpls', lambda: 1e7, maxIterations: 50, tolerance: 0.001, maxPoints: 1024, broadBandWindowCm1: null, broadBandLambda: 1e7 },
+  raman: { method: 'arpls', lambda: 1e4, maxIterations: 50, tolerance: 0.001, maxPoints: 1024, broadBandWindowCm1: [2800, 3800], broadBandLambda: 1e7 },
 } as const satisfies Record<string, Required<BaselineOptions>>;
 
 /** Estimate a baseline under the bands and subtract it. */
