@@ -151,6 +151,15 @@ export function libraryTests({ baseUrl: BASE_URL, password: PASSWORD }) {
       assert.equal(await page.getByRole('button', { name: 'Retire compound' }).count(), 0);
       await assertAccessible(page, 'the chlorine detail page for an inspector');
       await screenshot(page, 'inspector-compound-chlorine');
+      // Every role runs structure checks from the account tab; checked here in the dark palette too.
+      await page.emulateMedia({ colorScheme: 'dark' });
+      await page.goto(`${BASE_URL}/tabs/account/library/structure`);
+      await waitForPage(page, 'Structure check');
+      await runStructure(page, AMMONIA);
+      assert.equal((await readStructureResult(page, 'C3v')).gamma, '2A1 + 2E');
+      await assertAccessible(page, 'the structure check for an inspector, dark palette');
+      await screenshot(page, 'inspector-structure-check-dark');
+      await page.emulateMedia({ colorScheme: 'light' });
       // The supervisor's editor route is not in the inspector's shell at all.
       await page.goto(`${BASE_URL}/tabs/library/chlorine/edit`);
       await waitForPage(page, 'Cases');

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { IonButton, IonIcon } from '@ionic/react';
 import { arrowBackOutline } from 'ionicons/icons';
 import { useLocation } from 'react-router-dom';
@@ -18,6 +18,11 @@ export default function StructureCheckPage() {
   const paths = libraryPaths(useLocation().pathname);
   const [input, setInput] = useState<StructureInput>();
   const result = useStructureCheck(input);
+  const answer = useRef<HTMLDivElement>(null);
+  // On a tablet the form fills the screen: bring each new answer (or refusal) into view.
+  useEffect(() => {
+    if (result.dataUpdatedAt || result.errorUpdatedAt) answer.current?.scrollIntoView({ block: 'start' });
+  }, [result.dataUpdatedAt, result.errorUpdatedAt]);
   return (
     <PageShell title={t('pages.structure.title')}>
       <IonButton fill="outline" routerLink={paths.list} routerDirection="back" className="sb-back">
@@ -32,7 +37,7 @@ export default function StructureCheckPage() {
           <p className="sb-muted">{t('library.structure.intro')}</p>
           <StructureInputForm onRun={setInput} busy={result.isFetching} />
         </section>
-        <div aria-live="polite">
+        <div aria-live="polite" ref={answer}>
           {result.isError && <StructureProblemAlert error={result.error} />}
           {result.data && !result.isError && <StructureCheckResult outcome={result.data} />}
           {!input && <p className="sb-panel sb-muted">{t('library.structure.empty')}</p>}
