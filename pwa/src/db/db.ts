@@ -2,12 +2,27 @@ import Dexie, { type EntityTable } from 'dexie';
 import { instrumentChecksSchema, type InstrumentCheckRow } from './instrumentChecksTable';
 import { libraryCacheSchema, type LibraryCacheRow } from './libraryCacheTable';
 import { sessionSchema, type SessionRow } from './sessionTable';
+import { captureRowSchema } from './captureRecord';
+import type { CaseRow } from './casesTable';
+import type { HandoverRow } from './handoversTable';
+import type { NoteRow } from './notesTable';
+import { outboxSchema, type OutboxRow } from './outboxTable';
+import type { PhotoRow } from './photosTable';
+import type { SampleRow } from './samplesTable';
+import { syncMetaSchema, type SyncMetaRow } from './syncMetaTable';
 
 /** Siteband's on-device database; each later version bump adds its own upgrade step here. */
 export class SitebandDb extends Dexie {
   session!: EntityTable<SessionRow, 'key'>;
   libraryCache!: EntityTable<LibraryCacheRow, 'key'>;
   instrumentChecks!: EntityTable<InstrumentCheckRow, 'id'>;
+  cases!: EntityTable<CaseRow, 'id'>;
+  samples!: EntityTable<SampleRow, 'id'>;
+  handovers!: EntityTable<HandoverRow, 'id'>;
+  notes!: EntityTable<NoteRow, 'id'>;
+  photos!: EntityTable<PhotoRow, 'id'>;
+  outbox!: EntityTable<OutboxRow, 'seq'>;
+  syncMeta!: EntityTable<SyncMetaRow, 'key'>;
 
   constructor(name = 'siteband') {
     super(name);
@@ -20,6 +35,19 @@ export class SitebandDb extends Dexie {
     // and no existing row changes, so the upgrade step only records that nothing needs moving.
     this.version(3)
       .stores({ libraryCache: libraryCacheSchema })
+      .upgrade(() => undefined);
+    // Version 4: field capture (cases, samples, hand-overs, site notes, photos), the outbox of
+    // changes for the server and the sync cursor. All new tables start empty; no row moves.
+    this.version(4)
+      .stores({
+        cases: captureRowSchema,
+        samples: captureRowSchema,
+        handovers: captureRowSchema,
+        notes: captureRowSchema,
+        photos: captureRowSchema,
+        outbox: outboxSchema,
+        syncMeta: syncMetaSchema,
+      })
       .upgrade(() => undefined);
   }
 }

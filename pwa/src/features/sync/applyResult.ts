@@ -1,0 +1,27 @@
+import type { SitebandDb } from '../../db/db';
+import type { OutboxRow } from '../../db/outboxTable';
+import { captureScope, tableFor } from './captureTables';
+import { refreshSyncState } from './syncState';
+import type { ChangeResult } from './syncTypes';
+
+/**
+ * Acts on the server's answer to one change, in one transaction with the record. A duplicate is
+ * treated as the first answer it stands for. Only an applied change leaves the outbox.
+ */
+export async function applyResult(db: SitebandDb, entry: OutboxRow, result: ChangeResult): Promise<void> {
+  const status = result.status === 'duplicate' ? (result.firstStatus ?? 'applied') : result.status;
+  const table = tableFor(db, entry.entity);
+  await db.transaction('rw', captureScope(db), async () => {
+    if (status === 'applied') {
+      await db.outbox.delete(entry.seq!);
+      if (result.version !== undefined) await table.update(entry.id, { version: result.version });
+    } else if (status === 'conflict') {
+      await db.outbox.update(entry.seq!, { status: 'conflict', lastError: result.reason ?? null });
+      // A duplicate of a conflict carries no server copy: the next pull brings it.
+      if (result.server) await table.update(entry.id, { conflictServer: result.server });
+    } else {
+      await db.outbox.update(entry.seq!, { status: 'rejected', lastError: result.reason ?? 'Refused by the server' });
+    }
+    await refreshSyncState(db, entry.entity, entry.id);
+  });
+}

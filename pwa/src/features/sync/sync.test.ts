@@ -1,0 +1,250 @@
+import { afterEach, describe, expect, it } from 'vitest';
+import { openDb, type SitebandDb } from '../../db/db';
+import type { CaseData } from '../../db/casesTable';
+import { createApiClient, type ApiClient } from '../api/client';
+import { saveCase } from '../cases/saveCase';
+import { addPhoto } from '../photos/addPhoto';
+import { saveSample } from '../samples/saveSample';
+import { backoffDelayMs } from './backoff';
+import { mergePulled } from './mergePulled';
+import { nextBatch, pushOutbox } from './pushOutbox';
+import { resolveConflict } from './resolveConflict';
+import { createSyncEngine } from './syncEngine';
+import { everythingSynced } from './syncState';
+import { createTestServer, type TestServer } from './testServer';
+import { CHUNK_BYTES, type ByteSender } from './uploadPhotos';
+
+let db: SitebandDb | undefined;
+let count = 0;
+afterEach(async () => {
+  await db?.delete();
+});
+
+async function fresh(): Promise<SitebandDb> {
+  db = await openDb(`sync-test-${++count}-${Date.now()}`);
+  return db;
+}
+
+function caseData(over: Partial<CaseData> = {}): CaseData {
+  return {
+    siteName: 'Dockside shed 4', address: null, latitude: null, longitude: null, locationAccuracyM: null,
+    locationEnteredByHand: false, startedAt: '2026-03-02T08:30:00.000Z', weatherNotes: null, accessNotes: null, status: 'open', ...over,
+  };
+}
+
+function sampleData(caseId: string, label: string) {
+  return { caseId, label, container: null, description: null, locationOnSite: null, observations: {}, collectedBy: 'R. Inspector', collectedAt: '2026-03-02T09:00:00.000Z', sealNumber: null };
+}
+
+/** The real API client over the test server's fetch, with a fixed token. */
+function clientFor(server: TestServer): ApiClient {
+  const tokens = { current: () => ({ accessToken: 'a', refreshToken: 'r' }), save: async () => undefined, clear: async () => undefined };
+  return createApiClient({ tokens, fetchFn: server.fetch });
+}
+
+function senderFor(server: TestServer): ByteSender {
+  return { put: (path, bytes, headers) => server.fetch(path, { method: 'PUT', body: bytes, headers }) };
+}
+
+describe('recording a change', () => {
+  it('writes the record and its outbox entry together, and a failed transaction leaves neither', async () => {
+    const d = await fresh();
+    const id = crypto.randomUUID();
+    await saveCase(d, id, caseData());
+    expect((await d.cases.get(id))?.sync).toBe('local');
+    const [entry] = await d.outbox.toArray();
+    expect(entry).toMatchObject({ entity: 'case', id, op: 'upsert', status: 'pending', baseVersion: null });
+    expect(entry.data).toMatchObject({ siteName: 'Dockside shed 4' });
+
+    // A sample whose outbox write fails (duplicate changeId forced by a unique index) must not be stored either.
+    const sampleId = crypto.randomUUID();
+    const realUuid = crypto.randomUUID.bind(crypto);
+    crypto.randomUUID = () => entry.changeId as ReturnType<typeof realUuid>;
+    try {
+      await expect(saveSample(d, sampleId, sampleData(id, 'S-1'))).rejects.toThrow();
+    } finally {
+      crypto.randomUUID = realUuid;
+    }
+    expect(await d.samples.get(sampleId)).toBeUndefined();
+    expect(await d.outbox.count()).toBe(1);
+  });
+
+  it('folds an edit into the change not yet sent and refuses a case without a site name', async () => {
+    const d = await fresh();
+    const id = crypto.randomUUID();
+    await saveCase(d, id, caseData());
+    await saveCase(d, id, caseData({ siteName: 'Dockside shed 5' }));
+    const entries = await d.outbox.toArray();
+    expect(entries).toHaveLength(1);
+    expect(entries[0].data.siteName).toBe('Dockside shed 5');
+    await expect(saveCase(d, crypto.randomUUID(), caseData({ siteName: '  ' }))).rejects.toThrow(/siteName/);
+    expect(await d.cases.count()).toBe(1);
+  });
+});
+
+describe('pushing the outbox', () => {
+  it('sends at most 200 changes per batch, parents first, and marks every record on server', async () => {
+    const d = await fresh();
+    const server = createTestServer();
+    const caseId = crypto.randomUUID();
+    await saveCase(d, caseId, caseData());
+    for (let i = 0; i < 250; i += 1) await saveSample(d, crypto.randomUUID(), sampleData(caseId, `S-${i}`));
+    expect(await pushOutbox(d, clientFor(server), 'tablet-test')).toBe(251);
+    expect(server.pushes.map((b) => b.length)).toEqual([200, 51]);
+    expect(server.pushes[0][0]).toMatchObject({ entity: 'case', id: caseId });
+    expect(await d.outbox.count()).toBe(0);
+    expect(new Set((await d.samples.toArray()).map((s) => s.sync))).toEqual(new Set(['server']));
+    expect((await d.cases.get(caseId))?.version).toBe(1);
+  }, 60_000);
+
+  it('re-sends the same changeIds after a lost answer, so the server writes each record once', async () => {
+    const d = await fresh();
+    const server = createTestServer();
+    const api = clientFor(server);
+    const caseId = crypto.randomUUID();
+    await saveCase(d, caseId, caseData());
+    await saveSample(d, crypto.randomUUID(), sampleData(caseId, 'S-1'));
+    server.loseNextPushAnswer();
+    await expect(pushOutbox(d, api, 'tablet-test')).rejects.toThrow(/No connection/);
+    expect((await d.cases.get(caseId))?.sync).toBe('sending');
+    const sentFirst = server.pushes[0].map((c) => c.changeId);
+
+    await pushOutbox(d, api, 'tablet-test');
+    expect(server.pushes[1].map((c) => c.changeId)).toEqual(sentFirst);
+    expect([...server.writes.values()]).toEqual([1, 1]);
+    expect(await d.outbox.count()).toBe(0);
+    expect((await d.cases.get(caseId))?.sync).toBe('server');
+  });
+
+  it('keeps a rejected record with its reason and sends the next edit as a new change', async () => {
+    const d = await fresh();
+    const server = createTestServer({ rejectIf: (c) => (c.data?.label === 'bad' ? 'label must not be "bad"' : undefined) });
+    const caseId = crypto.randomUUID();
+    const sampleId = crypto.randomUUID();
+    await saveCase(d, caseId, caseData());
+    await saveSample(d, sampleId, sampleData(caseId, 'bad'));
+    await pushOutbox(d, clientFor(server), 'tablet-test');
+    const sample = await d.samples.get(sampleId);
+    expect(sample).toMatchObject({ sync: 'local', rejectedReason: 'label must not be "bad"' });
+    expect(sample?.data.label).toBe('bad');
+    expect(await everythingSynced(d)).toBe(false);
+
+    await saveSample(d, sampleId, sampleData(caseId, 'S-1'));
+    await pushOutbox(d, clientFor(server), 'tablet-test');
+    const fixed = await d.samples.get(sampleId);
+    expect(fixed).toMatchObject({ sync: 'server', version: 1 });
+    expect(fixed?.rejectedReason).toBeUndefined();
+    expect(await everythingSynced(d)).toBe(true);
+  });
+
+  it('keeps both versions on a conflict; "keep mine" re-sends on the server version, "take the server\'s" adopts it', async () => {
+    const d = await fresh();
+    const server = createTestServer();
+    const api = clientFor(server);
+    const mine = crypto.randomUUID();
+    const theirs = crypto.randomUUID();
+    await saveCase(d, mine, caseData());
+    await saveCase(d, theirs, caseData({ siteName: 'Yard B' }));
+    await pushOutbox(d, api, 'tablet-test');
+    server.writeAsOtherDevice('case', mine, caseData({ siteName: 'Renamed elsewhere' }));
+    server.writeAsOtherDevice('case', theirs, caseData({ siteName: 'Yard B (gate 2)' }));
+    await saveCase(d, mine, caseData({ siteName: 'Dockside shed 4, north door' }));
+    await saveCase(d, theirs, caseData({ siteName: 'Yard B east' }));
+    await pushOutbox(d, api, 'tablet-test');
+
+    const conflicted = await d.cases.get(mine);
+    expect(conflicted?.sync).toBe('conflict');
+    expect(conflicted?.data.siteName).toBe('Dockside shed 4, north door');
+    expect(conflicted?.conflictServer).toMatchObject({ version: 2, data: { siteName: 'Renamed elsewhere' } });
+
+    await resolveConflict(d, 'case', mine, 'mine');
+    await resolveConflict(d, 'case', theirs, 'server');
+    const [next] = await nextBatch(d);
+    await pushOutbox(d, api, 'tablet-test');
+    expect(server.pushes.at(-1)).toEqual([expect.objectContaining({ id: mine, baseVersion: 2, changeId: next.changeId })]);
+    expect(server.records.get(mine)?.record).toMatchObject({ version: 3, data: { siteName: 'Dockside shed 4, north door' } });
+    const taken = await d.cases.get(theirs);
+    expect(taken).toMatchObject({ sync: 'server', version: 2, data: { siteName: 'Yard B (gate 2)' } });
+    // The server's own field is not taken over: a later push must not carry it.
+    expect(taken?.data).not.toHaveProperty('inspectorId');
+  });
+});
+
+describe('merging a pull', () => {
+  it('stores server records, and turns a newer server version of a locally edited record into a conflict', async () => {
+    const d = await fresh();
+    const id = crypto.randomUUID();
+    const record = { entity: 'case', id, version: 1, syncSeq: 5, deleted: false, createdAt: '', updatedAt: '', data: { ...caseData(), inspectorId: 'u-1' } };
+    expect(await mergePulled(d, record)).toBe('stored');
+    expect(await d.cases.get(id)).toMatchObject({ sync: 'server', version: 1 });
+    expect(await mergePulled(d, record)).toBe('same');
+
+    await saveCase(d, id, caseData({ weatherNotes: 'Rain' }));
+    const newer = { ...record, version: 2, syncSeq: 9, data: { ...record.data, weatherNotes: 'Dry' } };
+    expect(await mergePulled(d, newer)).toBe('conflict');
+    const row = await d.cases.get(id);
+    expect(row?.data.weatherNotes).toBe('Rain');
+    expect(row).toMatchObject({ sync: 'conflict', conflictServer: { version: 2 } });
+    expect(await mergePulled(d, { ...record, entity: 'scan' })).toBe('skipped');
+  });
+});
+
+describe('photos and the engine', () => {
+  it('uploads photo bytes in chunks, resumes from the server offset, and the hash matches', async () => {
+    const d = await fresh();
+    const server = createTestServer();
+    const caseId = crypto.randomUUID();
+    await saveCase(d, caseId, caseData());
+    const bytes = new Uint8Array(CHUNK_BYTES * 2 + 1000).map((_, i) => (i * 7) % 251);
+    const photoId = await addPhoto(d, { caseId, ownerType: 'case', ownerId: caseId }, { fileName: 'door.jpg', contentType: 'image/jpeg', bytes: bytes.buffer });
+    // The tablet believes it sent less than the server holds: the 409 answer leads to the status route.
+    const sender = senderFor(server);
+    let puts = 0;
+    const flaky: ByteSender = {
+      async put(path, body, headers) {
+        puts += 1;
+        if (puts === 2) throw new TypeError('Failed to fetch');
+        return sender.put(path, body, headers);
+      },
+    };
+    const engine = createSyncEngine({ db: d, api: clientFor(server), sender: flaky, clientId: 'tablet-test', schedule: () => () => undefined, backoff: { random: () => 0 } });
+    expect((await engine.syncNow()).failures).toBe(1);
+    expect((await d.photos.get(photoId))?.sync).toBe('sending');
+    const status = await engine.syncNow();
+    expect(status).toMatchObject({ failures: 0, lastError: null });
+    expect(server.uploads.get(photoId)).toEqual(bytes);
+    expect(await d.photos.get(photoId)).toMatchObject({ sync: 'server', uploadedAt: expect.any(String) });
+    expect(await everythingSynced(d)).toBe(true);
+  }, 60_000);
+
+  it('backs off exponentially with jitter and schedules a retry after a failed cycle', async () => {
+    expect(backoffDelayMs(1, { random: () => 0 })).toBe(1000);
+    expect(backoffDelayMs(3, { random: () => 0.999999 })).toBe(8000);
+    expect(backoffDelayMs(30, { random: () => 0 })).toBe(150_000);
+    expect(() => backoffDelayMs(0)).toThrow(RangeError);
+
+    const d = await fresh();
+    const server = createTestServer();
+    await saveCase(d, crypto.randomUUID(), caseData());
+    server.failNext(2);
+    const delays: number[] = [];
+    let retry: (() => void) | undefined;
+    const engine = createSyncEngine({
+      db: d, api: clientFor(server), sender: senderFor(server), clientId: 'tablet-test', now: () => 0,
+      backoff: { random: () => 0 },
+      schedule: (run, delay) => {
+        delays.push(delay);
+        retry = run;
+        return () => undefined;
+      },
+    });
+    await engine.syncNow();
+    await engine.syncNow();
+    expect(delays).toEqual([1000, 2000]);
+    expect(engine.status()).toMatchObject({ failures: 2, retryAt: 2000 });
+    retry?.();
+    await engine.syncNow();
+    expect(engine.status()).toMatchObject({ failures: 0, retryAt: null });
+    expect(await everythingSynced(d)).toBe(true);
+  });
+});

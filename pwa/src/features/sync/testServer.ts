@@ -1,0 +1,124 @@
+/**
+ * An in-memory stand-in for the sync routes, for unit tests only: versions, stored change outcomes
+ * (so a re-sent changeId answers `duplicate`), conflicts on a stale base version, a rejection rule,
+ * a pull cursor and chunked uploads with SHA-256. It follows PROTOCOL.md, not the server's code.
+ */
+import type { ServerRecord } from '../../db/captureRecord';
+import type { ChangeEnvelope, ChangeResult } from './syncTypes';
+
+interface Stored {
+  record: ServerRecord;
+}
+
+export interface TestServer {
+  fetch: typeof fetch;
+  records: Map<string, Stored>;
+  pushes: ChangeEnvelope[][];
+  /** Applied writes per record id, to check exactly-once delivery. */
+  writes: Map<string, number>;
+  uploads: Map<string, Uint8Array>;
+  /** Makes the next push commit and then lose its answer (the client sees a network error). */
+  loseNextPushAnswer(): void;
+  /** Makes the next n requests fail before reaching the server. */
+  failNext(n: number): void;
+  /** Writes a record as another device would. */
+  writeAsOtherDevice(entity: string, id: string, data: Record<string, unknown>): void;
+}
+
+function json(body: unknown, status = 200): Response {
+  return new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
+}
+
+async function sha256Hex(bytes: Uint8Array): Promise<string> {
+  const digest = await crypto.subtle.digest('SHA-256', bytes as BufferSource);
+  return [...new Uint8Array(digest)].map((b) => b.toString(16).padStart(2, '0')).join('');
+}
+
+/** Builds a fresh test server. */
+export function createTestServer({ rejectIf }: { rejectIf?: (change: ChangeEnvelope) => string | undefined } = {}): TestServer {
+  const records = new Map<string, Stored>();
+  const outcomes = new Map<string, ChangeResult>();
+  const writes = new Map<string, number>();
+  const uploads = new Map<string, Uint8Array>();
+  const pushes: ChangeEnvelope[][] = [];
+  let seq = 0;
+  let loseAnswer = false;
+  let failing = 0;
+
+  function write(entity: string, id: string, data: Record<string, unknown>): ServerRecord {
+    const previous = records.get(id)?.record;
+    const record: ServerRecord = {
+      entity, id, version: (previous?.version ?? 0) + 1, syncSeq: ++seq, deleted: false,
+      createdAt: previous?.createdAt ?? '2026-01-01T00:00:00.000Z', updatedAt: '2026-01-01T00:00:00.000Z',
+      data: entity === 'case' ? { ...data, inspectorId: 'u-1' } : data,
+    };
+    records.set(id, { record });
+    writes.set(id, (writes.get(id) ?? 0) + 1);
+    return record;
+  }
+
+  function apply(change: ChangeEnvelope): ChangeResult {
+    const first = outcomes.get(change.changeId);
+    if (first) return { changeId: change.changeId, status: 'duplicate', firstStatus: first.status as 'applied', version: first.version, reason: first.reason };
+    const current = records.get(change.id)?.record;
+    let result: ChangeResult;
+    const reason = rejectIf?.(change);
+    if (reason) result = { changeId: change.changeId, status: 'rejected', reason };
+    else if ((current?.version ?? null) !== change.baseVersion) result = { changeId: change.changeId, status: 'conflict', reason: 'baseVersion is stale', server: current };
+    else result = { changeId: change.changeId, status: 'applied', version: write(change.entity, change.id, change.data ?? {}).version };
+    outcomes.set(change.changeId, result);
+    return result;
+  }
+
+  const fetchFn = async (input: RequestInfo | URL, init: RequestInit = {}): Promise<Response> => {
+    if (failing > 0) {
+      failing -= 1;
+      throw new TypeError('Failed to fetch');
+    }
+    const url = new URL(String(input), 'http://tablet.test');
+    if (url.pathname === '/api/sync/push') {
+      const body = JSON.parse(String(init.body)) as { changes: ChangeEnvelope[] };
+      pushes.push(body.changes);
+      const results = body.changes.map(apply);
+      if (loseAnswer) {
+        loseAnswer = false;
+        throw new TypeError('Failed to fetch');
+      }
+      return json({ results });
+    }
+    if (url.pathname === '/api/sync/pull') {
+      const after = Number(url.searchParams.get('cursor') ?? 0);
+      const changes = [...records.values()].map((s) => s.record).filter((r) => r.syncSeq > after).sort((a, b) => a.syncSeq - b.syncSeq);
+      return json({ changes, cursor: String(seq), hasMore: false });
+    }
+    const content = url.pathname.match(/^\/api\/attachments\/([^/]+)\/(content|status)$/);
+    if (content) {
+      const id = content[1];
+      const meta = records.get(id)?.record.data as { size: number; sha256: string } | undefined;
+      if (!meta) return json({ message: 'No such attachment' }, 404);
+      const have = uploads.get(id) ?? new Uint8Array(0);
+      const status = async () => ({ id, size: meta.size, receivedBytes: have.length, complete: have.length === meta.size && (await sha256Hex(have)) === meta.sha256, sha256: meta.sha256, uploadedAt: have.length === meta.size ? '2026-01-01T00:00:01.000Z' : null });
+      if (content[2] === 'status') return json(await status());
+      const range = String((init.headers as Record<string, string>)['Content-Range']).match(/^bytes (\d+)-(\d+)\/(\d+)$/);
+      if (!range || Number(range[1]) !== have.length) return json({ message: `upload must resume at ${have.length}` }, 409);
+      const chunk = new Uint8Array(init.body as ArrayBuffer);
+      const next = new Uint8Array(have.length + chunk.length);
+      next.set(have);
+      next.set(chunk, have.length);
+      uploads.set(id, next);
+      return json(await status());
+    }
+    return json({ message: 'not found' }, 404);
+  };
+
+  return {
+    fetch: fetchFn as typeof fetch,
+    records,
+    pushes,
+    writes,
+    uploads,
+    loseNextPushAnswer: () => void (loseAnswer = true),
+    failNext: (n) => void (failing = n),
+    writeAsOtherDevice: (entity, id, data) => void write(entity, id, data),
+  };
+}

@@ -1,0 +1,71 @@
+import type { SitebandDb } from '../../db/db';
+import type { PhotoRow } from '../../db/photosTable';
+import type { ApiClient } from '../api/client';
+import { ApiError } from '../api/apiError';
+import { refreshSyncState } from './syncState';
+import type { AttachmentStatus } from './syncTypes';
+
+/** Sends raw bytes; the JSON API client cannot, so the upload has its own door with the same bearer token. */
+export interface ByteSender {
+  put(path: string, bytes: ArrayBuffer, headers: Record<string, string>): Promise<Response>;
+}
+
+/** Bytes per chunk: small enough that a dropped connection loses little (each chunk is all or nothing). */
+export const CHUNK_BYTES = 256 * 1024;
+
+/** Where the server's copy stands; asking through the API client also refreshes an expired token. */
+function serverStatus(api: ApiClient, id: string): Promise<AttachmentStatus> {
+  return api.request<AttachmentStatus>(`/api/attachments/${id}/status`);
+}
+
+async function save(db: SitebandDb, id: string, status: AttachmentStatus): Promise<void> {
+  await db.transaction('rw', [db.photos, db.outbox], async () => {
+    await db.photos.update(id, { receivedBytes: status.receivedBytes, uploadedAt: status.complete ? status.uploadedAt : null });
+    await refreshSyncState(db, 'attachment', id);
+  });
+}
+
+/**
+ * Uploads one photo's bytes in chunks with Content-Range, resuming from the offset the server
+ * reports. A 409 (offset moved) or 401 asks the server where it stands and carries on; a 422 (hash
+ * mismatch, the server discarded everything) starts over once.
+ */
+export async function uploadPhoto(db: SitebandDb, api: ApiClient, sender: ByteSender, photo: PhotoRow): Promise<void> {
+  const bytes = photo.bytes;
+  if (!bytes) return;
+  const size = bytes.byteLength;
+  let offset = photo.receivedBytes;
+  let restarts = 0;
+  for (let guard = 0; guard < Math.ceil(size / CHUNK_BYTES) + 8; guard += 1) {
+    if (offset >= size) offset = (await serverStatus(api, photo.id)).receivedBytes;
+    const end = Math.min(offset + CHUNK_BYTES, size) - 1;
+    const response = await sender.put(`/api/attachments/${photo.id}/content`, bytes.slice(offset, end + 1), {
+      'Content-Type': photo.data.contentType,
+      'Content-Range': `bytes ${offset}-${end}/${size}`,
+    });
+    if (response.ok) {
+      const status = (await response.json()) as AttachmentStatus;
+      await save(db, photo.id, status);
+      if (status.complete) return;
+      offset = status.receivedBytes;
+    } else if (response.status === 409 || response.status === 401) {
+      const status = await serverStatus(api, photo.id);
+      await save(db, photo.id, status);
+      if (status.complete) return;
+      offset = status.receivedBytes;
+    } else if (response.status === 422 && restarts === 0) {
+      restarts += 1;
+      offset = 0;
+    } else {
+      throw await ApiError.fromResponse(response);
+    }
+  }
+  throw new Error(`The upload of ${photo.data.fileName} made no progress`);
+}
+
+/** Uploads every photo whose metadata the server holds and whose bytes it has not verified yet. */
+export async function uploadPhotos(db: SitebandDb, api: ApiClient, sender: ByteSender): Promise<number> {
+  const waiting = await db.photos.filter((p) => p.version !== null && p.uploadedAt === null && p.bytes !== undefined).toArray();
+  for (const photo of waiting) await uploadPhoto(db, api, sender, photo);
+  return waiting.length;
+}
