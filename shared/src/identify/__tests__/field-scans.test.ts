@@ -107,6 +107,14 @@ describe('bands beside the CO2 region', () => {
       expect(result.candidates[0]!.id).toBe('acetonitrile');
     });
   }
+
+  it('on diamond ATR the C≡N band is set apart with the crystal region, and acetonitrile still ranks first', () => {
+    const bands = compoundBands(byId('acetonitrile'), 'ir', 'condensed', engineAnalyser, BROAD_BAND_WINDOW_FRACTION);
+    const scan = syntheticSpectrum([{ bands, amount: 1 }], { technique: 'ir', phase: 'condensed', dropWeak: 0, atr: true }, seededRandom(10));
+    const { processed, result } = identifySpectrum(scan, { process: { technique: 'ir', phase: 'condensed', atr: true } });
+    expect(processed.flaggedPeaks.some((p) => p.flag === 'atr-diamond' && Math.abs(p.x - 2253) < 5)).toBe(true);
+    expect(result.candidates[0]!.id).toBe('acetonitrile');
+  });
 });
 
 describe('phase of the candidates', () => {
