@@ -67,6 +67,8 @@ export function estimateBaseline(
     baseline = fit.baseline;
     iterations = fit.iterations;
     if (options.broadBandWindowCm1) {
+      const [lo, hi] = options.broadBandWindowCm1;
+      if (!(lo < hi)) throw new RangeError(`baseline broadBandWindowCm1 must be [from, to] with from < to, got [${lo}, ${hi}]`);
       if (!(options.broadBandLambda > 0)) throw new RangeError(`baseline broadBandLambda must be positive, got ${options.broadBandLambda}`);
       const { maxIterations, tolerance } = options;
       keepBroadBands(xCm1, y, baseline, { windowCm1: options.broadBandWindowCm1, lambda: options.broadBandLambda / stepCm1 ** 4, maxIterations, tolerance });

@@ -3,6 +3,7 @@ import { atrCorrection } from '../atr.js';
 import { DEFAULT_BASELINE, estimateBaseline } from '../baseline.js';
 import { blockMeans, expandBlocks } from '../decimate.js';
 import { interferenceRegions, separateFlaggedPeaks } from '../interferences.js';
+import { keepBroadBands } from '../broad-bands.js';
 import { pickPeaks } from '../peaks.js';
 import { detectSaturation } from '../saturation.js';
 import { smoothingNoiseGain, smoothSavitzkyGolay } from '../smooth.js';
@@ -71,6 +72,31 @@ describe('estimateBaseline', () => {
     viaPackage.corrected.forEach((v, i) => expect(v + viaPackage.baseline[i]).toBeCloseTo(s.y[i], 12));
     expect(Math.abs(viaPackage.corrected[650] - 0.8)).toBeLessThan(0.1);
     expect(() => estimateBaseline(s.xCm1, s.y, 2, { ...DEFAULT_BASELINE.ir, method: 'x' as never })).toThrow(/method/);
+    expect(() => estimateBaseline(s.xCm1, s.y, 2, { ...DEFAULT_BASELINE.raman, broadBandWindowCm1: [3800, 2800] })).toThrow(/broadBandWindowCm1/);
+    expect(() => estimateBaseline(s.xCm1, s.y, 2, { ...DEFAULT_BASELINE.raman, broadBandLambda: 0 })).toThrow(/broadBandLambda/);
+  });
+});
+
+describe('keepBroadBands', () => {
+  // Invented scans: a broad X–H-like band (FWHM 400) at 3400 on two backgrounds.
+  const band = [{ x: 3400, height: 1000, fwhm: 400 }];
+  const fit = { windowCm1: [2800, 3800] as const, lambda: 1e7, maxIterations: 50, tolerance: 0.001 };
+  const soft = (s: ReturnType<typeof syntheticSpectrum>) => estimateBaseline(s.xCm1, s.y, 1, { ...DEFAULT_BASELINE.raman, broadBandWindowCm1: null }).baseline;
+
+  it('holds the soft baseline under a broad band where the stiff fit follows the background', () => {
+    const s = syntheticSpectrum({ from: 150, to: 4000, step: 1, shape: 'gaussian', bands: band, noise: 5, technique: 'raman', background: (x) => 200 + 0.05 * x });
+    const baseline = soft(s);
+    expect(baseline[3400 - 150]! - (200 + 0.05 * 3400)).toBeGreaterThan(500);
+    expect(keepBroadBands(s.xCm1, s.y, baseline, fit)).toBe(true);
+    expect(Math.abs(baseline[3400 - 150]! - (200 + 0.05 * 3400))).toBeLessThan(50);
+  });
+
+  it('leaves the soft baseline alone when the stiff fit cannot follow strong fluorescence', () => {
+    const s = syntheticSpectrum({ from: 150, to: 4000, step: 1, shape: 'gaussian', bands: band, noise: 5, technique: 'raman', background: (x) => 30000 * Math.exp(-(((x - 1400) / 1300) ** 2)) });
+    const baseline = soft(s);
+    const before = Float64Array.from(baseline);
+    expect(keepBroadBands(s.xCm1, s.y, baseline, fit)).toBe(false);
+    expect(baseline).toEqual(before);
   });
 });
 
