@@ -4,6 +4,7 @@ import assert from 'node:assert/strict';
 import { after, before, describe, it } from 'node:test';
 import { blockingViolations } from './axe.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
+import { identifyTests } from './identify.mjs';
 import { libraryTests } from './library.mjs';
 import {
   ageStoredSession,
@@ -284,4 +285,5 @@ describe('offline', { concurrency: false }, () => {
   });
 });
 
+identifyTests({ baseUrl: BASE_URL, password: PASSWORD });
 libraryTests({ baseUrl: BASE_URL, password: PASSWORD });

@@ -8,10 +8,10 @@ describe('identification formats', () => {
     expect(formatCm1(2849.5, 'de', 1)).toBe('2849,5');
   });
 
-  it('always signs an offset, using the minus sign of the language', () => {
+  it('signs every offset except one that rounds to zero', () => {
     expect(formatOffsetCm1(0.4, 'en')).toBe('+0.4');
     expect(formatOffsetCm1(-1.25, 'en', 2)).toBe('-1.25');
-    expect(formatOffsetCm1(0, 'en')).toBe('+0.0');
+    expect(formatOffsetCm1(-0.04, 'en')).toBe('0.0');
   });
 
   it('writes shares as whole percentages and band agreement with two decimals', () => {

@@ -5,11 +5,11 @@ export function formatCm1(value: number, language: string, decimals = 0): string
   return new Intl.NumberFormat(language, { useGrouping: false, minimumFractionDigits: decimals, maximumFractionDigits: decimals }).format(value);
 }
 
-/** An offset in cm⁻¹ with its sign always shown ("+0.4", "−1.2"). */
+/** An offset in cm⁻¹ with its sign shown ("+0.4", "-1.2"); one that rounds to zero has none ("0.0"). */
 export function formatOffsetCm1(value: number, language: string, decimals = 1): string {
   return new Intl.NumberFormat(language, {
     useGrouping: false,
-    signDisplay: 'always',
+    signDisplay: 'exceptZero',
     minimumFractionDigits: decimals,
     maximumFractionDigits: decimals,
   }).format(value);
