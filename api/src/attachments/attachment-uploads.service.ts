@@ -14,6 +14,7 @@ import { DataSource } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user';
 import { canSeeCase } from '../cases/case-access';
 import { Case } from '../cases/case.entity';
+import { ScanRecomputeQueue } from '../scans/scan-recompute.queue';
 import { ObjectStorageService } from '../storage/object-storage.service';
 import { lockSyncCounter, takeSyncSeq } from '../sync/sync-sequence';
 import { ATTACHMENT_RULES, mediaType } from './attachment-limits';
@@ -41,6 +42,7 @@ export class AttachmentUploadsService {
   constructor(
     private readonly dataSource: DataSource,
     private readonly storage: ObjectStorageService,
+    private readonly recompute: ScanRecomputeQueue,
   ) {}
 
   /** The upload state, for anyone who may see the case. */
@@ -132,6 +134,8 @@ export class AttachmentUploadsService {
       await manager.update(Attachment, { id: row.id }, { storageKey: key, uploadedAt: row.uploadedAt, syncSeq });
     });
     await this.storage.deletePrefix(stagingPrefix(row.id));
+    // Committed: a scan's raw file is now on the server, so its identification can be recomputed.
+    await this.recompute.enqueueRawFileOwner(row);
   }
 
   /** The live attachment, when the user may see its case (inspectors: only their own); 404 otherwise. */

@@ -70,4 +70,12 @@ export class Scan extends SyncedRecord {
 
   @Column({ type: 'datetime', precision: 3, nullable: true })
   serverRecomputedAt: Date | null;
+
+  /** How the server's result differs from the tablet's (a `ResultComparison`); null until one has run. */
+  @Column({ type: 'json', nullable: true })
+  mismatch: Record<string, unknown> | null;
+
+  /** Why the last recomputation failed (unreadable file, storage down...); null when it ran or has not run yet. */
+  @Column({ type: 'varchar', length: 1000, nullable: true })
+  serverRecomputeError: string | null;
 }

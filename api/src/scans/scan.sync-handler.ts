@@ -1,9 +1,9 @@
+import { isDeepStrictEqual } from 'node:util';
 import { Attachment } from '../attachments/attachment.entity';
 import { writableSample } from '../samples/sample-parent';
 import { ChangeRejected, type ChangeContext, type SyncHandler } from '../sync/sync-handler';
 import { ScanDataDto } from './dto/scan-data.dto';
 import { InstrumentCheck } from './instrument-check.entity';
-import { recomputeIdentification } from './recompute-identification';
 import { Scan } from './scan.entity';
 
 /** Scans through sync: linked to a sample, an instrument check of the same case, and a raw-scan attachment. */
@@ -23,10 +23,11 @@ export const scanSyncHandler: SyncHandler<Scan, ScanDataDto> = {
     return sample.caseId;
   },
 
-  assign(_ctx, row, data, { caseId }) {
+  assign(_ctx, row, data, { caseId, isNew }) {
     if (data.technique === 'ir' && data.excitationNm != null) {
       throw new ChangeRejected('excitationNm is only for Raman scans; leave it out for IR');
     }
+    const before = isNew ? null : recomputeInputs(row);
     row.sampleId = data.sampleId;
     row.caseId = caseId;
     row.technique = data.technique;
@@ -39,11 +40,15 @@ export const scanSyncHandler: SyncHandler<Scan, ScanDataDto> = {
     row.parsedSummary = data.parsedSummary ?? null;
     row.result = data.result ?? null;
     row.inspectorAcknowledgedAt = data.inspectorAcknowledgedAt ? new Date(data.inspectorAcknowledgedAt) : null;
-    // A changed scan invalidates any earlier server recomputation; the hook fills it in when it is wired.
-    const server = recomputeIdentification(row);
-    row.serverResult = server?.result ?? null;
-    row.resultMismatch = server?.mismatch ?? null;
-    row.serverRecomputedAt = server ? new Date() : null;
+    // An earlier recomputation stands only while what it was computed from is unchanged (an
+    // acknowledgement alone keeps it); otherwise it is cleared and the sync service queues a new one.
+    if (!before || !isDeepStrictEqual(before, recomputeInputs(row))) {
+      row.serverResult = null;
+      row.resultMismatch = null;
+      row.mismatch = null;
+      row.serverRecomputedAt = null;
+      row.serverRecomputeError = null;
+    }
   },
 
   toData: (row) => ({
@@ -62,6 +67,8 @@ export const scanSyncHandler: SyncHandler<Scan, ScanDataDto> = {
     serverResult: row.serverResult,
     resultMismatch: row.resultMismatch,
     serverRecomputedAt: row.serverRecomputedAt?.toISOString() ?? null,
+    mismatch: row.mismatch,
+    serverRecomputeError: row.serverRecomputeError,
   }),
 };
 
@@ -85,4 +92,9 @@ async function checkLinks(ctx: ChangeContext, id: string, data: ScanDataDto, cas
       throw new ChangeRejected(`rawSha256 differs from the SHA-256 declared for attachment ${raw.id}`);
     }
   }
+}
+
+/** What a server recomputation is computed from. */
+function recomputeInputs(row: Scan) {
+  return { technique: row.technique, phase: row.phase, excitationNm: row.excitationNm, raw: row.rawAttachmentId, sha: row.rawSha256, result: row.result };
 }

@@ -1,4 +1,5 @@
 import { Module } from '@nestjs/common';
+import { ScansModule } from '../scans/scans.module';
 import { ChangeApplier } from './change-applier';
 import { SyncController } from './sync.controller';
 import { SyncRegistry } from './sync-registry';
@@ -6,6 +7,7 @@ import { SyncService } from './sync.service';
 
 /** Push and pull of cases, samples, hand-overs, scans, instrument checks, notes, escalations and attachment metadata. */
 @Module({
+  imports: [ScansModule],
   controllers: [SyncController],
   providers: [SyncService, ChangeApplier, SyncRegistry],
 })

@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { DataSource } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user';
 import { whereCaseVisible } from '../cases/case-access';
+import { ScanRecomputeQueue } from '../scans/scan-recompute.queue';
 import { ChangeApplier } from './change-applier';
 import type { PushResponseDto } from './dto/change-result.dto';
 import { DEFAULT_PULL_LIMIT, type PullQueryDto, type PullResponseDto } from './dto/pull.dto';
@@ -16,14 +17,20 @@ export class SyncService {
     private readonly dataSource: DataSource,
     private readonly registry: SyncRegistry,
     private readonly applier: ChangeApplier,
+    private readonly recompute: ScanRecomputeQueue,
   ) {}
 
   /** Applies the changes in order, each in its own transaction; one bad change does not stop the others. */
   async push(batch: PushRequestDto, user: AuthenticatedUser): Promise<PushResponseDto> {
     const results = [];
+    const changedScans: string[] = [];
     for (const change of batch.changes) {
-      results.push(await this.applier.apply(change, { clientId: batch.clientId, batchId: batch.batchId }, user));
+      const result = await this.applier.apply(change, { clientId: batch.clientId, batchId: batch.batchId }, user);
+      if (result.status === 'applied' && change.entity === 'scan' && change.op === 'upsert') changedScans.push(String(change.id));
+      results.push(result);
     }
+    // Each change has committed: the server recomputes those scans after this answer (when their raw file is in).
+    this.recompute.enqueue(...changedScans);
     return { results };
   }
 

@@ -1,6 +1,12 @@
 import { CreateUsersAndRefreshTokens1796152400000 } from './1796152400000-CreateUsersAndRefreshTokens';
 import { CreateFieldCaptureAndSync1796238800000 } from './1796238800000-CreateFieldCaptureAndSync';
 import { CreateLibraryEdits1796240000000 } from './1796240000000-CreateLibraryEdits';
+import { AddScanRecomputation1796250000000 } from './1796250000000-AddScanRecomputation';
 
 /** Every committed migration, oldest first (listed, not globbed, so sources and dist behave the same). */
-export const MIGRATIONS = [CreateUsersAndRefreshTokens1796152400000, CreateFieldCaptureAndSync1796238800000, CreateLibraryEdits1796240000000];
+export const MIGRATIONS = [
+  CreateUsersAndRefreshTokens1796152400000,
+  CreateFieldCaptureAndSync1796238800000,
+  CreateLibraryEdits1796240000000,
+  AddScanRecomputation1796250000000,
+];

@@ -1,0 +1,94 @@
+import { isDeepStrictEqual } from 'node:util';
+import { Injectable, Logger } from '@nestjs/common';
+import { DataSource } from 'typeorm';
+import { Attachment } from '../attachments/attachment.entity';
+import { IdentifyService } from '../identify/identify.service';
+import { ObjectStorageService } from '../storage/object-storage.service';
+import { lockSyncCounter, takeSyncSeq } from '../sync/sync-sequence';
+import { compareIdentifications } from './identification-comparison';
+import { recomputeRequest } from './recompute-request';
+import { scanResultRecord } from './scan-result-record';
+import { Scan } from './scan.entity';
+
+/** The server-owned fields a recomputation writes on a scan. */
+type RecomputedFields = Pick<Scan, 'serverResult' | 'resultMismatch' | 'mismatch' | 'serverRecomputedAt' | 'serverRecomputeError'>;
+
+/** Longest failure message kept on a scan (the column's size). */
+const MAX_ERROR_CHARS = 1000;
+
+/**
+ * Recomputes one scan's identification from its raw file with the shared code the tablet ran, and
+ * stores it beside the tablet's result with the comparison. The tablet's result is never changed.
+ */
+@Injectable()
+export class ScanRecomputeService {
+  private readonly logger = new Logger('ScanRecompute');
+
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly storage: ObjectStorageService,
+    private readonly identify: IdentifyService,
+  ) {}
+
+  /**
+   * Recomputes the scan when its raw file is on the server (otherwise does nothing). A failure is
+   * stored on the scan as `serverRecomputeError`; this only throws when the database itself fails.
+   */
+  async run(scanId: string): Promise<void> {
+    const scan = await this.dataSource.getRepository(Scan).findOneBy({ id: scanId });
+    const raw = scan?.rawAttachmentId ? await this.dataSource.getRepository(Attachment).findOneBy({ id: scan.rawAttachmentId }) : null;
+    if (!scan || scan.deletedAt || !raw || raw.deletedAt || !raw.storageKey) return;
+    if (raw.kind !== 'raw-scan' || raw.ownerType !== 'scan' || raw.ownerId !== scan.id) return;
+    await this.store(scan, await this.recompute(scan, raw));
+  }
+
+  private async recompute(scan: Scan, raw: Attachment): Promise<RecomputedFields> {
+    let stage = 'read the raw file from object storage';
+    try {
+      const bytes = await this.storage.read(raw.storageKey!);
+      stage = 'identify the raw file';
+      const { request, parametersFrom } = recomputeRequest(scan);
+      const serverResult = scanResultRecord(await this.identify.identifyFile({ originalname: raw.fileName, buffer: bytes }, request));
+      const { mismatch, comparison } = compareIdentifications(scan.result, serverResult, parametersFrom);
+      return {
+        serverResult,
+        resultMismatch: mismatch,
+        // Through JSON, like the stored copy, so a re-run can tell it has nothing new.
+        mismatch: JSON.parse(JSON.stringify(comparison)) as Record<string, unknown>,
+        serverRecomputedAt: new Date(),
+        serverRecomputeError: null,
+      };
+    } catch (error) {
+      const message = `Could not ${stage}: ${error instanceof Error ? error.message : String(error)}`.slice(0, MAX_ERROR_CHARS);
+      this.logger.warn(`Scan ${scan.id}: ${message}`);
+      // serverRecomputedAt stays null, so the next start-up tries again (storage may be back by then).
+      return { serverResult: null, resultMismatch: null, mismatch: null, serverRecomputedAt: null, serverRecomputeError: message };
+    }
+  }
+
+  /**
+   * Writes the outcome with a new sync sequence number (not a new version: the tablet's edits do not
+   * conflict with it), so pulls carry it. Skipped when the scan changed meanwhile (that change queued
+   * its own run), when the stored outcome is already the same (re-running changes nothing), and for a
+   * failure after an earlier success on the same scan version.
+   */
+  private async store(read: Scan, fields: RecomputedFields): Promise<void> {
+    await this.dataSource.transaction(async (manager) => {
+      // Every sync write takes this lock first, so the scan cannot change until this commits.
+      const counter = await lockSyncCounter(manager);
+      const current = await manager.findOneBy(Scan, { id: read.id });
+      if (!current || current.version !== read.version || current.deletedAt) return;
+      // A failure (storage briefly down) never replaces a recomputation that succeeded for this same version.
+      if (fields.serverRecomputeError !== null && current.serverRecomputedAt !== null) return;
+      const same =
+        isDeepStrictEqual(current.serverResult, fields.serverResult) &&
+        isDeepStrictEqual(current.mismatch, fields.mismatch) &&
+        current.resultMismatch === fields.resultMismatch &&
+        current.serverRecomputeError === fields.serverRecomputeError &&
+        (current.serverRecomputedAt === null) === (fields.serverRecomputedAt === null);
+      if (same) return;
+      Object.assign(current, fields, { syncSeq: await takeSyncSeq(manager, counter) });
+      await manager.save(Scan, current);
+    });
+  }
+}

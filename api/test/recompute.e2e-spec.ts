@@ -1,0 +1,228 @@
+import { randomUUID } from 'node:crypto';
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { identifySpectrum, importSpectrum } from '@siteband/shared';
+import { fileKey } from '../src/attachments/attachment-storage-keys';
+import { ScanRecomputeQueue } from '../src/scans/scan-recompute.queue';
+import { ScanRecomputeService } from '../src/scans/scan-recompute.service';
+import { ObjectStorageService } from '../src/storage/object-storage.service';
+import { demo, pullAll, push, sha256, upsert, uploadWhole } from './support/field-records';
+import { startS3Fake, type S3Fake } from './support/s3-fake';
+import { DEMO, signIn, startTestApp, type TestApp } from './support/test-app';
+
+const FIXTURE = 'ir-example.csv';
+const fixtureBytes = readFileSync(join(__dirname, '..', '..', 'fixtures', 'spectra', FIXTURE));
+
+/** The result a tablet stores for the fixture: the shared identification run on the device, in the sync form. */
+function tabletResult(): Record<string, unknown> {
+  const spectrum = importSpectrum(new Uint8Array(fixtureBytes), { fileName: FIXTURE, technique: 'ir' });
+  const { processed, result } = identifySpectrum(spectrum, { process: { technique: 'ir', phase: 'condensed' } });
+  const record = { ...result, quality: processed.quality, processing: processed.parameters, codeVersion: result.parameters.methodVersion };
+  return JSON.parse(JSON.stringify(record));
+}
+
+describe('Server recomputation of synced scans (e2e, MariaDB + S3 fake)', () => {
+  let s3: S3Fake;
+  let t: TestApp;
+  let inspector: string;
+  let supervisor: string;
+  let queue: ScanRecomputeQueue;
+  let caseId: string;
+  let sampleId: string;
+  const computed = tabletResult();
+
+  beforeAll(async () => {
+    s3 = await startS3Fake();
+    t = await startTestApp({ env: s3.env });
+    inspector = (await signIn(t, DEMO.inspector)).accessToken;
+    supervisor = (await signIn(t, DEMO.supervisor)).accessToken;
+    queue = t.app.get(ScanRecomputeQueue);
+    caseId = randomUUID();
+    sampleId = randomUUID();
+    const results = await push(t, inspector, [upsert('case', caseId, demo.case()), upsert('sample', sampleId, demo.sample(caseId))]);
+    expect(results.map((r) => r.status)).toEqual(['applied', 'applied']);
+  });
+  afterAll(async () => {
+    await t?.close();
+    await s3?.close();
+  });
+
+  const irScan = (overrides: Record<string, unknown> = {}) =>
+    demo.scan(sampleId, { technique: 'ir', excitationNm: null, parsedSummary: { points: 851 }, result: computed, ...overrides });
+  const rawFile = (scanId: string, bytes: Buffer) => ({
+    ownerType: 'scan',
+    ownerId: scanId,
+    kind: 'raw-scan',
+    fileName: FIXTURE,
+    contentType: 'text/csv',
+    size: bytes.length,
+    sha256: sha256(bytes),
+  });
+
+  /** The scan as the supervisor's case view shows it, once every queued recomputation has run. */
+  async function scanView(scanId: string): Promise<Record<string, unknown>> {
+    await queue.idle();
+    const response = await t.http().get(`/api/cases/${caseId}`).set('Authorization', `Bearer ${supervisor}`).expect(200);
+    const scan = (response.body.scans as Record<string, unknown>[]).find((s) => s.id === scanId);
+    if (!scan) throw new Error(`scan ${scanId} is not in the case view`);
+    return scan;
+  }
+
+  /** Pushes a scan linked to its raw file, then the attachment, then uploads the bytes (scan row first). */
+  async function scanThenUpload(result: Record<string, unknown>, bytes: Buffer = fixtureBytes): Promise<string> {
+    const scanId = randomUUID();
+    const attachmentId = randomUUID();
+    const results = await push(t, inspector, [
+      upsert('scan', scanId, irScan({ rawAttachmentId: attachmentId, rawSha256: sha256(bytes), result })),
+      upsert('attachment', attachmentId, rawFile(scanId, bytes)),
+    ]);
+    expect(results.map((r) => r.status)).toEqual(['applied', 'applied']);
+    await uploadWhole(t, inspector, attachmentId, bytes, 'text/csv').expect(200);
+    return scanId;
+  }
+
+  it('stores a server result equal to the tablet’s when both ran the same code on the same file', async () => {
+    const scanId = await scanThenUpload(computed);
+    const scan = await scanView(scanId);
+    expect(scan.serverResult).toEqual(scan.result);
+    expect(scan.serverResult).toEqual(computed);
+    expect(scan.resultMismatch).toBe(false);
+    expect(scan.serverRecomputeError).toBeNull();
+    expect(scan.serverRecomputedAt).toEqual(expect.stringMatching(/^\d{4}-\d\d-\d\dT/));
+    expect(scan.mismatch).toMatchObject({ parametersFrom: 'tablet', differences: [], processing: [], candidates: null, scores: [], peaks: null });
+
+    // Pulls carry it too (a new sequence number for the same version).
+    const pulled = (await pullAll(t, supervisor)).changes.find((c) => c.entity === 'scan' && c.id === scanId);
+    expect(pulled?.version).toBe(1);
+    expect(pulled?.data).toMatchObject({ serverResult: computed, resultMismatch: false, serverRecomputeError: null });
+  });
+
+  it('flags a tablet result with another top candidate, describing the difference and keeping the tablet’s result', async () => {
+    const candidates = computed.candidates as Record<string, unknown>[];
+    const tampered = { ...computed, candidates: [candidates[1], candidates[0], ...candidates.slice(2)] };
+    const scanId = await scanThenUpload(tampered);
+    const scan = await scanView(scanId);
+    expect(scan.result).toEqual(tampered);
+    expect(scan.serverResult).toEqual(computed);
+    expect(scan.resultMismatch).toBe(true);
+    const ids = candidates.slice(0, 5).map((c) => c.id);
+    expect(scan.mismatch).toMatchObject({
+      candidates: { tablet: [ids[1], ids[0], ...ids.slice(2)], server: ids },
+      // The same compounds with the same band agreements, only in another order.
+      scores: [],
+      peaks: null,
+      libraryVersion: null,
+      methodVersion: null,
+    });
+    expect((scan.mismatch as { differences: string[] }).differences).toEqual([
+      `Top likely compounds differ: tablet ${[ids[1], ids[0], ...ids.slice(2)].join(', ')}; server ${ids.join(', ')}`,
+    ]);
+  });
+
+  it('reports another library or method version, changed band agreements and moved peaks as such', async () => {
+    const peaks = computed.peaks as { x: number }[];
+    const candidates = computed.candidates as { id: string; score: number }[];
+    const tampered = {
+      ...computed,
+      libraryVersion: 'older-library',
+      parameters: { ...(computed.parameters as object), methodVersion: '0.9.0' },
+      candidates: [{ ...candidates[0], score: candidates[0].score - 0.01 }, ...candidates.slice(1)],
+      peaks: peaks.map((p, i) => (i === 0 ? { ...p, x: p.x + 0.5 } : p)),
+    };
+    const scan = await scanView(await scanThenUpload(tampered));
+    expect(scan.resultMismatch).toBe(true);
+    const server = computed.libraryVersion as { version: string; contentHash: string };
+    expect(scan.mismatch).toMatchObject({
+      libraryVersion: { tablet: 'older-library', server: `${server.version} (${server.contentHash})` },
+      methodVersion: { tablet: '0.9.0', server: (computed.parameters as { methodVersion: string }).methodVersion },
+      candidates: null,
+      scores: [{ id: candidates[0].id, tablet: candidates[0].score - 0.01, server: candidates[0].score }],
+      peaks: { tabletCount: peaks.length, serverCount: peaks.length, moved: [{ tabletCm1: peaks[0].x + 0.5, serverCm1: peaks[0].x }] },
+    });
+    expect((scan.mismatch as { differences: string[] }).differences).toHaveLength(4);
+  });
+
+  it('uses the pipeline defaults when the tablet recorded no processing settings, and says so', async () => {
+    const { processing: _processing, ...withoutProcessing } = computed;
+    const scan = await scanView(await scanThenUpload(withoutProcessing));
+    expect(scan.resultMismatch).toBe(false);
+    expect(scan.mismatch).toMatchObject({ parametersFrom: 'defaults', differences: [] });
+    expect((scan.mismatch as { notes: string[] }).notes).toContain('The tablet recorded no processing settings: the server used the pipeline defaults');
+  });
+
+  it('recomputes when the upload finished before the scan was linked to its raw file', async () => {
+    const scanId = randomUUID();
+    const attachmentId = randomUUID();
+    await push(t, inspector, [upsert('scan', scanId, irScan({ result: null })), upsert('attachment', attachmentId, rawFile(scanId, fixtureBytes))]);
+    await uploadWhole(t, inspector, attachmentId, fixtureBytes, 'text/csv').expect(200);
+    expect((await scanView(scanId)).serverRecomputedAt).toBeNull();
+
+    const [linked] = await push(t, inspector, [upsert('scan', scanId, irScan({ rawAttachmentId: attachmentId, rawSha256: sha256(fixtureBytes) }), 1)]);
+    expect(linked.status).toBe('applied');
+    const scan = await scanView(scanId);
+    expect(scan.serverResult).toEqual(computed);
+    expect(scan.resultMismatch).toBe(false);
+  });
+
+  it('keeps the recomputation through an acknowledgement, and clears and redoes it when the result changes', async () => {
+    const scanId = await scanThenUpload(computed);
+    const first = await scanView(scanId);
+    const base = { rawAttachmentId: first.rawAttachmentId, rawSha256: first.rawSha256 };
+    await push(t, inspector, [upsert('scan', scanId, irScan({ ...base, inspectorAcknowledgedAt: '2026-11-30T09:30:00.000Z' }), 1)]);
+    const acknowledged = await scanView(scanId);
+    expect(acknowledged.serverRecomputedAt).toBe(first.serverRecomputedAt);
+    expect(acknowledged.serverResult).toEqual(computed);
+
+    const candidates = computed.candidates as Record<string, unknown>[];
+    await push(t, inspector, [upsert('scan', scanId, irScan({ ...base, result: { ...computed, candidates: candidates.slice(1) } }), 2)]);
+    const changed = await scanView(scanId);
+    expect(changed.resultMismatch).toBe(true);
+    expect(changed.serverResult).toEqual(computed);
+  });
+
+  it('records an unreadable raw file on the scan while the push is answered 200', async () => {
+    const bytes = Buffer.from('this file holds no spectrum at all\n');
+    const scanId = randomUUID();
+    const attachmentId = randomUUID();
+    await push(t, inspector, [upsert('scan', scanId, irScan({ result: null })), upsert('attachment', attachmentId, rawFile(scanId, bytes))]);
+    await uploadWhole(t, inspector, attachmentId, bytes, 'text/csv').expect(200);
+    const response = await t
+      .http()
+      .post('/api/sync/push')
+      .set('Authorization', `Bearer ${inspector}`)
+      .send({ clientId: 'e2e-tablet', batchId: randomUUID(), changes: [upsert('scan', scanId, irScan({ rawAttachmentId: attachmentId, rawSha256: sha256(bytes) }), 1)] });
+    expect(response.status).toBe(200);
+    expect(response.body.results[0].status).toBe('applied');
+    const scan = await scanView(scanId);
+    expect(scan.serverRecomputeError).toEqual(expect.stringMatching(/^Could not identify the raw file: .+/));
+    expect(scan).toMatchObject({ serverResult: null, resultMismatch: null, mismatch: null, serverRecomputedAt: null });
+    expect(scan.result).toEqual(computed);
+  });
+
+  it('re-running changes nothing, and a pending scan is picked up again as at start-up', async () => {
+    const scanId = await scanThenUpload(computed);
+    await queue.idle();
+    const read = async () => (await t.dataSource.query('SELECT serverResult, mismatch, serverRecomputedAt, syncSeq FROM scans WHERE id = ?', [scanId]))[0];
+    const before = await read();
+    await t.app.get(ScanRecomputeService).run(scanId);
+    expect(await read()).toEqual(before);
+
+    // As if the server stopped before storing it: start-up finds the scan again and stores the same result.
+    await t.dataSource.query('UPDATE scans SET serverResult = NULL, resultMismatch = NULL, mismatch = NULL, serverRecomputedAt = NULL WHERE id = ?', [scanId]);
+    expect(await queue.enqueuePending()).toBeGreaterThanOrEqual(1);
+    const again = await scanView(scanId);
+    expect(again.serverResult).toEqual(computed);
+    expect(again.resultMismatch).toBe(false);
+  });
+
+  it('records a missing raw object as a storage failure instead of throwing', async () => {
+    const scanId = await scanThenUpload(computed);
+    const scan = await scanView(scanId);
+    await t.app.get(ObjectStorageService).deletePrefix(fileKey(caseId, scan.rawAttachmentId as string));
+    await t.dataSource.query('UPDATE scans SET serverRecomputedAt = NULL WHERE id = ?', [scanId]);
+    await t.app.get(ScanRecomputeService).run(scanId);
+    const failed = await scanView(scanId);
+    expect(failed.serverRecomputeError).toEqual(expect.stringMatching(/^Could not read the raw file from object storage: /));
+    expect(failed.serverResult).toBeNull();
+  });
+});
