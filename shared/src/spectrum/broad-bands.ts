@@ -23,7 +23,7 @@ const MARGIN_CM1 = 300;
 // Cosine taper at each edge of the window, cm⁻¹, so no step appears.
 const TAPER_CM1 = 150;
 // The stiff fit is far smoother than the grid: this many points are plenty.
-const MAX_POINTS = 512;
+const MAX_POINTS = 128;
 // Outside the window both fits must agree within this many noise σ (RMS), or the stiff one is
 // not following the background (strong fluorescence) and is not used.
 const AGREEMENT_SIGMA = 3;
