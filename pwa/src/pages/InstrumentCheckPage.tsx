@@ -105,7 +105,14 @@ export default function InstrumentCheckPage() {
           <p className={state.check.pass ? 'sb-success' : 'sb-error'} data-testid="check-verdict">
             {state.check.reason}
           </p>
-          <LazySpectrumPlot plot={state.plot} technique={standard.technique} expectedCm1={standard.bands.map((b) => b.positionCm1)} yLabel={standard.technique === 'ir' ? t('identify.plot.yRawIr') : t('identify.plot.yRaman')} />
+          <LazySpectrumPlot
+            plot={state.plot}
+            technique={standard.technique}
+            expectedCm1={standard.bands.map((b) => b.positionCm1)}
+            yLabel={standard.technique === 'ir' ? t('identify.plot.yRawIr') : t('identify.plot.yRawRaman')}
+            peaksKey={t('identify.check.foundKey')}
+            expectedKey={t('identify.check.referenceKey')}
+          />
           <InstrumentCheckTable bands={state.check.bands} />
         </section>
       )}

@@ -45,7 +45,14 @@ export function ScanResultPanel({ outcome, acknowledged, onAcknowledge, onEscala
         <h2 id="plot-heading" className="sb-panel__heading">
           {outcome.title ? t('identify.plot.headingTitled', { title: outcome.title }) : t('identify.plot.heading')}
         </h2>
-        <LazySpectrumPlot plot={plot} technique={result.technique} expectedCm1={selected?.expectedCm1 ?? []} yLabel={yLabel} />
+        <LazySpectrumPlot
+          plot={plot}
+          technique={result.technique}
+          expectedCm1={selected?.expectedCm1 ?? []}
+          yLabel={yLabel}
+          peaksKey={t('identify.plot.peaksKey')}
+          expectedKey={selected ? t('identify.plot.expectedKey', { name: selected.candidate.name }) : ''}
+        />
         {plot.flaggedPeaks.length > 0 && (
           <ul className="sb-flagged" aria-label={t('identify.plot.flagged')}>
             {plot.flaggedPeaks.map((p) => (

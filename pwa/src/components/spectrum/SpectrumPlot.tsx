@@ -17,6 +17,9 @@ export interface SpectrumPlotProps {
   readonly expectedCm1?: readonly number[];
   /** The ordinate's name with its unit. */
   readonly yLabel: string;
+  /** Legend words for the triangles and the dashed lines (they mean different things per screen). */
+  readonly peaksKey: string;
+  readonly expectedKey: string;
 }
 
 const HEIGHT = 380;
@@ -25,7 +28,7 @@ const HEIGHT = 380;
  * The scan drawn with uPlot: drag across to zoom, buttons to pan, zoom out and reset (gloved hands
  * cannot scroll a wheel). IR runs from high to low wavenumber as spectroscopists read it.
  */
-export default function SpectrumPlot({ plot, technique, expectedCm1 = [], yLabel }: SpectrumPlotProps) {
+export default function SpectrumPlot({ plot, technique, expectedCm1 = [], yLabel, peaksKey, expectedKey }: SpectrumPlotProps) {
   const { t, i18n } = useTranslation();
   const host = useRef<HTMLDivElement>(null);
   const chart = useRef<uPlot | null>(null);
@@ -84,8 +87,8 @@ export default function SpectrumPlot({ plot, technique, expectedCm1 = [], yLabel
     <figure className="sb-plot" aria-label={t('identify.plot.figure', { axis: xLabel, count: plot.peaksCm1.length })}>
       <div ref={host} className="sb-plot__canvas" data-testid="spectrum-plot" />
       <figcaption className="sb-plot__caption">
-        <span className="sb-plot__key sb-plot__key--peak">{t('identify.plot.peaksKey')}</span>
-        {expectedCm1.length > 0 && <span className="sb-plot__key sb-plot__key--expected">{t('identify.plot.expectedKey')}</span>}
+        <span className="sb-plot__key sb-plot__key--peak">{peaksKey}</span>
+        {expectedCm1.length > 0 && <span className="sb-plot__key sb-plot__key--expected">{expectedKey}</span>}
         <span className="sb-muted">{t('identify.plot.hint')}</span>
       </figcaption>
       <div className="sb-plot__controls" role="group" aria-label={t('identify.plot.controls')}>
