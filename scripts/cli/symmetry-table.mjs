@@ -1,6 +1,13 @@
 // The readable (non-JSON) output of `symmetry`: group, elements, Γvib and the activity table.
 
 
+/** `E, C3, 3σv`: each element label once, with how often it occurs. */
+function countLabels(elements) {
+  const counts = new Map();
+  for (const e of elements) counts.set(e.label, (counts.get(e.label) ?? 0) + 1);
+  return [...counts].map(([label, n]) => `${n > 1 ? n : ''}${label}`).join(', ');
+}
+
 /** Print a structure check as plain text for a person at a terminal. */
 export function printSymmetryTable(c) {
   const v = c.vibrations;
@@ -20,7 +27,7 @@ export function printSymmetryTable(c) {
 
   const out = [
     `${c.title ? `${c.title}\n` : ''}${c.formula}: ${c.atoms} atoms, point group ${c.pointGroup}${c.order ? ` (order ${c.order})` : ''}, ${c.top ?? c.topType}`,
-    `symmetry elements: ${c.elements.map((e) => e.label).join(', ')}`,
+    `symmetry elements: ${countLabels(c.elements)}`,
     `Γvib = ${gamma}   (${v.total} vibrational degrees of freedom, ${v.fundamentals} distinct fundamentals)`,
     `IR-active ${v.irActive}, Raman-active ${v.ramanActive}, both ${v.coincident}, silent ${v.silent}${v.mutualExclusion ? '; centrosymmetric: rule of mutual exclusion' : ''}`,
     '',
