@@ -14,6 +14,7 @@ import { syntheticSpectrum as bandScan } from '../../spectrum/__tests__/syntheti
 import type { Phase, Technique } from '../../spectrum/types.js';
 import { BROAD_BAND_WINDOW_FRACTION, PHASE_MISMATCH_FACTOR } from '../constants.js';
 import { compoundBands } from '../expected-bands.js';
+import { identifyScan } from '../identify-scan.js';
 import { identifySpectrum } from '../identify-spectrum.js';
 import { seededRandom, syntheticSpectrum } from './synthetic.js';
 
@@ -142,5 +143,27 @@ describe('phase of the candidates', () => {
     const nitrate = salt.candidates.find((c) => c.id === 'sodium-nitrate')!;
     expect(nitrate.parts.phaseFactor).toBe(PHASE_MISMATCH_FACTOR);
     expect(nitrate.phaseMismatch).toMatch(/solid/);
+  });
+});
+
+describe('escalation needs more than one minor band', () => {
+  // Ozone gas IR ν3 1042 (vs), ν1 1103 (w) (Shimanouchi 1972, from memory; the library's values);
+  // the 1900 cm⁻¹ peak matches nothing in the library (invented).
+  const peak = (x: number, h: number) => ({ x, height: h, widthCm1: 4, relativeHeight: h });
+
+  it('a hazardous gas matching one peak of a two-peak scan keeps its caution card but does not escalate', () => {
+    const r = identifyScan({ technique: 'ir', phase: 'gas', peaks: [peak(1042, 0.9), peak(1900, 1)] });
+    const ozone = r.candidates.find((c) => c.id === 'ozone')!;
+    expect(ozone.score).toBeGreaterThanOrEqual(library.escalationRules.minScore);
+    expect(ozone.escalationEvidence).toBe(false);
+    expect(ozone.hazards[0]!.hazardous).toBe(true);
+    expect(r.escalation.triggers.some((t) => t.compoundId === 'ozone')).toBe(false);
+    expect(r.cautions.some((c) => c.startsWith('Ozone') && /not escalated/.test(c))).toBe(true);
+  });
+
+  it('the same gas escalates once a second of its bands is seen', () => {
+    const r = identifyScan({ technique: 'ir', phase: 'gas', peaks: [peak(1042, 1), peak(1103, 0.3), peak(1900, 1)] });
+    expect(r.candidates.find((c) => c.id === 'ozone')!.escalationEvidence).toBe(true);
+    expect(r.escalation.triggers.some((t) => t.compoundId === 'ozone')).toBe(true);
   });
 });
