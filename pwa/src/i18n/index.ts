@@ -3,6 +3,7 @@ import { initReactI18next } from 'react-i18next';
 import en from './en.json';
 import identify from './en/identify.json';
 import library from './en/library.json';
+import capture from './en/capture.json';
 
 /** Languages with a complete resource file; English is the source language. */
 export const SUPPORTED_LANGUAGES = ['en'] as const;
@@ -18,7 +19,7 @@ function storedLanguage(): Language {
 /** Starts i18next with every bundled resource (no network loading: the app must work offline). */
 export async function initI18n(): Promise<typeof i18next> {
   await i18next.use(initReactI18next).init({
-    resources: { en: { translation: { ...en, identify, library } } },
+    resources: { en: { translation: { ...en, identify, library, capture } } },
     lng: storedLanguage(),
     fallbackLng: 'en',
     interpolation: { escapeValue: false },

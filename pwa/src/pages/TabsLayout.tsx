@@ -5,10 +5,14 @@ import { useTranslation } from 'react-i18next';
 import { TAB_ICONS } from '../components/tabIcons';
 import { homePathForRole, tabsForRole, type TabId } from '../features/navigation/roleTabs';
 import { useSession } from '../features/session/SessionProvider';
+import { SyncProvider } from '../features/sync/SyncProvider';
 // Tab pages are imported here, not lazily: a lazy page inside Ionic's nested tab outlet was seen
 // to stay at opacity 0 after its first entry (Ionic 9.0.4). The whole signed-in area is one chunk
 // loaded after sign-in instead, which keeps it out of the first paint all the same.
 import CasesPage from './CasesPage';
+import CaseEditPage from './CaseEditPage';
+import CasePage from './CasePage';
+import SamplePage from './SamplePage';
 import CapturePage from './CapturePage';
 import InstrumentCheckPage from './InstrumentCheckPage';
 import ReviewQueuePage from './ReviewQueuePage';
@@ -22,7 +26,14 @@ import AccountPage from './AccountPage';
 
 /** The screens of each tab, relative to /tabs; a tab's detail routes sit under its own path. */
 const TAB_ROUTES: Readonly<Record<TabId, readonly { path: string; Page: ComponentType }[]>> = {
-  cases: [{ path: 'cases', Page: CasesPage }],
+  cases: [
+    { path: 'cases', Page: CasesPage },
+    { path: 'cases/new', Page: CaseEditPage },
+    { path: 'cases/:id', Page: CasePage },
+    { path: 'cases/:id/edit', Page: CaseEditPage },
+    { path: 'cases/:id/samples/new', Page: SamplePage },
+    { path: 'cases/:id/samples/:sampleId', Page: SamplePage },
+  ],
   capture: [
     { path: 'capture', Page: CapturePage },
     { path: 'capture/instrument-check', Page: InstrumentCheckPage },
@@ -56,22 +67,24 @@ export default function TabsLayout() {
   const tabs = tabsForRole(role);
   const home = homePathForRole(role);
   return (
-    <IonTabs>
-      <IonRouterOutlet>
-        {tabs.flatMap((tab) =>
-          TAB_ROUTES[tab.id].map(({ path, Page }) => <Route key={path} path={path} element={<Page />} />),
-        )}
-        <Route index element={<Navigate to={home} replace />} />
-        <Route path="*" element={<Navigate to={home} replace />} />
-      </IonRouterOutlet>
-      <IonTabBar slot="bottom" className="sb-tabbar" aria-label={t('nav.tabBar')}>
-        {tabs.map((tab) => (
-          <IonTabButton key={tab.id} tab={tab.id} href={tab.path} className="sb-tab" data-testid={`tab-${tab.id}`}>
-            <IonIcon icon={TAB_ICONS[tab.id]} aria-hidden="true" />
-            <IonLabel>{t(tab.labelKey)}</IonLabel>
-          </IonTabButton>
-        ))}
-      </IonTabBar>
-    </IonTabs>
+    <SyncProvider>
+      <IonTabs>
+        <IonRouterOutlet>
+          {tabs.flatMap((tab) =>
+            TAB_ROUTES[tab.id].map(({ path, Page }) => <Route key={path} path={path} element={<Page />} />),
+          )}
+          <Route index element={<Navigate to={home} replace />} />
+          <Route path="*" element={<Navigate to={home} replace />} />
+        </IonRouterOutlet>
+        <IonTabBar slot="bottom" className="sb-tabbar" aria-label={t('nav.tabBar')}>
+          {tabs.map((tab) => (
+            <IonTabButton key={tab.id} tab={tab.id} href={tab.path} className="sb-tab" data-testid={`tab-${tab.id}`}>
+              <IonIcon icon={TAB_ICONS[tab.id]} aria-hidden="true" />
+              <IonLabel>{t(tab.labelKey)}</IonLabel>
+            </IonTabButton>
+          ))}
+        </IonTabBar>
+      </IonTabs>
+    </SyncProvider>
   );
 }

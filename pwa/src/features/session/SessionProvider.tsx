@@ -2,7 +2,9 @@ import { createContext, useCallback, useContext, useEffect, useMemo, useState, u
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { useApiClient } from '../api/ApiClientContext';
 import { ApiError } from '../api/apiError';
+import { captureDb } from '../cases/captureDb';
 import { useOnlineStatus } from '../network/onlineStatus';
+import { clearCaptureDataIfSynced } from '../sync/clearCaptureData';
 import { login, logout, meQuery } from './authApi';
 import { offlineSessionEndsAt, sessionStatus, type SessionStatus } from './offlineGrace';
 import type { SessionStore } from './sessionStore';
@@ -57,6 +59,8 @@ export function SessionProvider({ store, offlineSessionHours, children }: { stor
   );
 
   const signOut = useCallback(async () => {
+    // Refuses (throws) while field records wait for the server: signing out would lose them.
+    await clearCaptureDataIfSynced(captureDb());
     try {
       if (store.current() && navigator.onLine) await logout(client);
     } catch (error) {

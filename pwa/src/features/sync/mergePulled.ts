@@ -16,7 +16,7 @@ export async function mergePulled(db: SitebandDb, record: ServerRecord, now = Da
     const entries = await entriesFor(db, entity, record.id);
     if (local && local.version === record.version && !record.deleted) {
       // Our own write coming back (or an upload finishing): only the upload time may be new.
-      if (entity === 'attachment' && typeof record.data.uploadedAt === 'string') await table.update(record.id, { uploadedAt: record.data.uploadedAt });
+      if (entity === 'attachment' && typeof record.data.uploadedAt === 'string') await db.photos.update(record.id, { uploadedAt: record.data.uploadedAt });
       await refreshSyncState(db, entity, record.id);
       return 'same';
     }

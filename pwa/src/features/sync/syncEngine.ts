@@ -21,7 +21,8 @@ export interface SyncEngineOptions {
   db: SitebandDb;
   api: ApiClient;
   sender: ByteSender;
-  clientId: string;
+  /** This device's id for the push envelope, or how to read it. */
+  clientId: string | (() => Promise<string>);
   backoff?: BackoffOptions;
   now?: () => number;
   /** Schedules the retry (default setTimeout); returns a cancel function. */
@@ -62,7 +63,7 @@ export function createSyncEngine(options: SyncEngineOptions): SyncEngine {
     set({ running: true, retryAt: null });
     try {
       // Push before pull, so a pulled record never meets a change whose answer was merely lost.
-      await pushOutbox(db, api, clientId);
+      await pushOutbox(db, api, typeof clientId === 'string' ? clientId : await clientId());
       await uploadPhotos(db, api, sender);
       await pullChanges(db, api);
       set({ running: false, lastSuccessAt: now(), lastError: null, failures: 0 });

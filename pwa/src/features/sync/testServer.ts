@@ -22,7 +22,7 @@ export interface TestServer {
   /** Makes the next n requests fail before reaching the server. */
   failNext(n: number): void;
   /** Writes a record as another device would. */
-  writeAsOtherDevice(entity: string, id: string, data: Record<string, unknown>): void;
+  writeAsOtherDevice(entity: string, id: string, data: object): void;
 }
 
 function json(body: unknown, status = 200): Response {
@@ -119,6 +119,6 @@ export function createTestServer({ rejectIf }: { rejectIf?: (change: ChangeEnvel
     uploads,
     loseNextPushAnswer: () => void (loseAnswer = true),
     failNext: (n) => void (failing = n),
-    writeAsOtherDevice: (entity, id, data) => void write(entity, id, data),
+    writeAsOtherDevice: (entity, id, data) => void write(entity, id, data as Record<string, unknown>),
   };
 }

@@ -1,0 +1,78 @@
+import { useId, useState } from 'react';
+import { useTranslation } from 'react-i18next';
+import { captureDb } from '../../features/cases/captureDb';
+import { addPhoto } from '../../features/photos/addPhoto';
+import { compressPhoto } from '../../features/photos/compressPhoto';
+import { usePhotos } from '../../features/photos/usePhotos';
+import { PhotoThumb } from './PhotoThumb';
+
+/** Photos of a sample: the camera (or files), compressed to JPEG on the tablet, and what is stored. */
+export function PhotoPicker({ caseId, sampleId, sampleLabel, editable }: { caseId: string; sampleId: string; sampleLabel: string; editable: boolean }) {
+  const { t } = useTranslation();
+  const inputId = useId();
+  const photos = usePhotos(sampleId);
+  const [busy, setBusy] = useState(false);
+  const [errors, setErrors] = useState<string[]>([]);
+
+  async function take(files: FileList | null) {
+    if (!files || files.length === 0) return;
+    setBusy(true);
+    const failed: string[] = [];
+    // One at a time: each photo is decoded at full camera size, which is heavy on a tablet.
+    for (const file of Array.from(files)) {
+      try {
+        const bytes = await compressPhoto(file);
+        const fileName = file.name.replace(/\.[^.]*$/, '') + '.jpg';
+        await addPhoto(captureDb(), { caseId, ownerType: 'sample', ownerId: sampleId }, { fileName, contentType: 'image/jpeg', bytes });
+      } catch (error) {
+        failed.push(t('capture.photos.failed', { file: file.name, reason: error instanceof Error ? error.message : String(error) }));
+      }
+    }
+    setErrors(failed);
+    setBusy(false);
+  }
+
+  return (
+    <section className="sb-panel" aria-labelledby="photos-heading">
+      <h2 id="photos-heading" className="sb-panel__heading">
+        {t('capture.photos.heading')}
+      </h2>
+      {photos && photos.length === 0 && <p className="sb-muted">{t('capture.photos.none')}</p>}
+      <div className="sb-photo-grid">
+        {photos?.map((photo, index) => (
+          <PhotoThumb key={photo.id} photo={photo} alt={t('capture.photos.alt', { label: sampleLabel, number: index + 1 })} />
+        ))}
+      </div>
+      {editable && (
+        <div className="sb-field">
+          <label htmlFor={inputId} className="sb-file-button">
+            {busy ? t('capture.photos.working') : t('capture.photos.take')}
+          </label>
+          <input
+            id={inputId}
+            className="sb-file-input"
+            type="file"
+            accept="image/*"
+            capture="environment"
+            multiple
+            disabled={busy}
+            data-testid="photo-input"
+            onChange={(e) => {
+              void take(e.target.files);
+              e.target.value = '';
+            }}
+          />
+          <p className="sb-field__hint">{t('capture.photos.hint')}</p>
+        </div>
+      )}
+      {errors.length > 0 && (
+        <ul className="sb-error" role="alert">
+          {errors.map((e) => (
+            <li key={e}>{e}</li>
+          ))}
+        </ul>
+      )}
+      {busy && <p role="status">{t('capture.photos.working')}</p>}
+    </section>
+  );
+}

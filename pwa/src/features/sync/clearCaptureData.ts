@@ -1,0 +1,24 @@
+import type { SitebandDb } from '../../db/db';
+import { captureScope } from './captureTables';
+import { everythingSynced } from './syncState';
+
+/** Refusal to sign out while records wait for the server; the message is the screen's text key. */
+export class UnsyncedWorkError extends Error {
+  readonly messageKey = 'capture.signOutBlocked';
+  constructor() {
+    super('Some field records have not reached the server yet: sync before signing out');
+    this.name = 'UnsyncedWorkError';
+  }
+}
+
+/**
+ * Clears the signed-in person's field records from the tablet, but only once the server has all of
+ * them; otherwise throws UnsyncedWorkError and deletes nothing. The check and the clearing share
+ * one transaction, so an edit made in between cannot be lost.
+ */
+export async function clearCaptureDataIfSynced(db: SitebandDb): Promise<void> {
+  await db.transaction('rw', [...captureScope(db), db.syncMeta], async () => {
+    if (!(await everythingSynced(db))) throw new UnsyncedWorkError();
+    await Promise.all([...captureScope(db), db.syncMeta].map((table) => table.clear()));
+  });
+}

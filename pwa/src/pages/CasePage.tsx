@@ -1,0 +1,86 @@
+import { IonButton, IonIcon } from '@ionic/react';
+import { addOutline, createOutline } from 'ionicons/icons';
+import { useTranslation } from 'react-i18next';
+import { useParams } from 'react-router-dom';
+import { CaseFacts } from '../components/cases/CaseFacts';
+import { ConflictPanel } from '../components/cases/ConflictPanel';
+import { NotesPanel } from '../components/cases/NotesPanel';
+import { SampleList } from '../components/cases/SampleList';
+import { SyncBar } from '../components/cases/SyncBar';
+import { CautionNote } from '../components/CautionNote';
+import { PageShell } from '../components/PageShell';
+import { captureDb } from '../features/cases/captureDb';
+import { casePaths } from '../features/cases/casePaths';
+import { caseIsOpen, saveCase } from '../features/cases/saveCase';
+import { useCase } from '../features/cases/useCases';
+
+/** One case: the visit, its samples, site notes, conflicts, sync, and submit or reopen. */
+export default function CasePage() {
+  const { t } = useTranslation();
+  const { id = '' } = useParams();
+  const row = useCase(id);
+  const title = row ? row.data.siteName : t('capture.case.title');
+  if (row === undefined) return <PageShell title={t('capture.case.title')}>{null}</PageShell>;
+  if (row === null) {
+    return (
+      <PageShell title={title}>
+        <p className="sb-error" role="alert">
+          {t('capture.case.notFound')}
+        </p>
+      </PageShell>
+    );
+  }
+  const open = caseIsOpen(row.data);
+  const inspectorMaySet = row.data.status === 'open' || row.data.status === 'submitted';
+
+  return (
+    <PageShell title={title}>
+      <div className="sb-case-actions">
+        <IonButton fill="outline" routerLink={casePaths.list} routerDirection="back" className="sb-back">
+          {t('capture.backToCases')}
+        </IonButton>
+        <SyncBar />
+      </div>
+      <ConflictPanel caseId={id} />
+      <section className="sb-panel" aria-labelledby="visit-heading">
+        <h2 id="visit-heading" className="sb-panel__heading">
+          {t('capture.case.visitHeading')}
+        </h2>
+        <CaseFacts row={row} />
+        <div className="sb-button-row">
+          {open && (
+            <IonButton fill="outline" routerLink={casePaths.edit(id)}>
+              <IonIcon icon={createOutline} slot="start" aria-hidden="true" />
+              {t('capture.case.edit')}
+            </IonButton>
+          )}
+          {inspectorMaySet && (
+            <IonButton
+              className={open ? 'sb-primary' : undefined}
+              fill={open ? 'solid' : 'outline'}
+              data-testid="case-submit-toggle"
+              onClick={() => void saveCase(captureDb(), id, { ...row.data, status: open ? 'submitted' : 'open' })}
+            >
+              {open ? t('capture.case.submit') : t('capture.case.reopen')}
+            </IonButton>
+          )}
+        </div>
+        {!open && <p className="sb-muted">{t('capture.case.frozen')}</p>}
+      </section>
+      <section className="sb-panel" aria-labelledby="samples-heading">
+        <h2 id="samples-heading" className="sb-panel__heading">
+          {t('capture.sample.listHeading')}
+        </h2>
+        <SampleList caseId={id} />
+        {open && (
+          <IonButton routerLink={casePaths.newSample(id)} className="sb-primary" data-testid="new-sample">
+            <IonIcon icon={addOutline} slot="start" aria-hidden="true" />
+            {t('capture.sample.new')}
+          </IonButton>
+        )}
+      </section>
+      <NotesPanel caseId={id} editable={open} />
+      <CautionNote />
+    </PageShell>
+  );
+}
