@@ -139,6 +139,55 @@ export function libraryTests({ baseUrl: BASE_URL, password: PASSWORD }) {
       await page.reload();
       await waitForPage(page, 'Chlorine');
       await page.getByTestId('compound-synonyms').last().filter({ hasText: synonym }).waitFor();
+
+      // Offline, the library comes from the tablet's copy, supervisor's edit included.
+      const { context } = browser;
+      await waitForServiceWorker(page);
+      await context.setOffline(true);
+      try {
+        await page.goto(`${BASE_URL}/tabs/library`);
+        await waitForPage(page, 'Compound library');
+        await page.getByTestId('library-version').last().filter({ hasText: "from this tablet's copy" }).waitFor();
+        await page.getByLabel('Search by name, synonym, CAS RN or formula').last().fill(synonym);
+        await page.getByTestId('compound-chlorine').last().waitFor();
+        await screenshot(page, 'offline-library-from-tablet');
+      } finally {
+        await context.setOffline(false);
+      }
+    });
+
+    it('refuses an entry the library cannot take, shows the server reasons, then adds and retires a copy', async () => {
+      const { page } = browser;
+      await page.goto(`${BASE_URL}/tabs/library/chlorine`);
+      await waitForPage(page, 'Chlorine');
+      await page.getByText('Copy as a new compound').last().click();
+      await waitForPage(page, 'New compound');
+      const id = `e2e-halogen-${Date.now() % 100000}`;
+      await page.getByLabel('Id (lower-case letters, digits and hyphens)').last().fill(id);
+      await page.getByLabel('Name', { exact: true }).last().fill('Trial halogen');
+
+      // A CAS RN with a wrong check digit never leaves the tablet.
+      await page.getByLabel('CAS RN').last().fill('7782-50-4');
+      await page.getByTestId('entry-error').last().filter({ hasText: 'check digit' }).waitFor();
+      assert.equal(await page.getByRole('button', { name: 'Save compound' }).last().isDisabled(), true);
+
+      // Chlorine's own CAS RN passes on the tablet, but the server refuses a second compound with it.
+      await page.getByLabel('CAS RN').last().fill('7782-50-5');
+      await page.getByTestId('labels-match').last().waitFor({ timeout: 20_000 });
+      await page.getByRole('button', { name: 'Save compound' }).last().click();
+      await page.getByTestId('server-error').last().filter({ hasText: '7782-50-5' }).waitFor();
+      await assertAccessible(page, 'the compound editor with server reasons');
+      await screenshot(page, 'supervisor-compound-editor-refused');
+
+      // 1234-56-6 has a valid check digit (6×1 + 5×2 + 4×3 + 3×4 + 2×5 + 1×6 = 56) and is not in the library.
+      await page.getByLabel('CAS RN').last().fill('1234-56-6');
+      await page.getByRole('button', { name: 'Save compound' }).last().click();
+      await waitForPage(page, 'Trial halogen');
+      await page.getByRole('button', { name: 'Retire compound' }).last().click();
+      await page.getByRole('button', { name: 'Press again to retire it' }).last().click();
+      await waitForPage(page, 'Compound library');
+      await page.getByLabel('Search by name, synonym, CAS RN or formula').last().fill('Trial halogen');
+      await page.getByText('No compound matches').last().waitFor();
       await signOut(page);
     });
 

@@ -40,6 +40,10 @@ export default function CompoundEditPage() {
     if (base && !draft) setDraft(isNew ? { ...draftOf(base), id: '', name: '' } : draftOf(base));
   }, [base, draft, isNew]);
 
+  // The server's reasons describe the entry as it was sent: once the form changes they are stale.
+  const { reset } = save;
+  useEffect(() => reset(), [draft, reset]);
+
   if (!canCurateLibrary(session?.user.role)) {
     return (
       <PageShell title={t('library.editor.title')}>
