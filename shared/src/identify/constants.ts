@@ -60,7 +60,7 @@ export const MIXTURE_GRID_STEP_CM1 = 2;
 export const MIXTURE_SIGMA_FRACTION = 0.6;
 
 /** Version of the ranking method, recorded with every result. */
-export const IDENTIFY_METHOD_VERSION = '1.0.0';
+export const IDENTIFY_METHOD_VERSION = '1.1.0';
 
 /**
  * Gas cells: an unresolved parallel band shows its P and R maxima, not its centre. Two peaks of
