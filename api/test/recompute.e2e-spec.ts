@@ -215,14 +215,35 @@ describe('Server recomputation of synced scans (e2e, MariaDB + S3 fake)', () => 
     expect(again.resultMismatch).toBe(false);
   });
 
-  it('records a missing raw object as a storage failure instead of throwing', async () => {
+  it('records a damaged or missing stored raw file as a failure instead of throwing', async () => {
+    const scanId = await scanThenUpload(computed);
+    const scan = await scanView(scanId);
+    const storage = t.app.get(ObjectStorageService);
+    const key = fileKey(caseId, scan.rawAttachmentId as string);
+    const damaged = Buffer.from(fixtureBytes);
+    damaged[100] ^= 0x01;
+    await storage.put(key, damaged, 'text/csv');
+    // As a start-up re-run would see it: not yet recomputed.
+    await t.dataSource.query('UPDATE scans SET serverRecomputedAt = NULL WHERE id = ?', [scanId]);
+    await t.app.get(ScanRecomputeService).run(scanId);
+    expect((await scanView(scanId)).serverRecomputeError).toBe(
+      `Could not read the raw file from object storage: the stored file no longer has SHA-256 ${sha256(fixtureBytes)}`,
+    );
+
+    await storage.deletePrefix(key);
+    await t.app.get(ScanRecomputeService).run(scanId);
+    const failed = await scanView(scanId);
+    expect(failed.serverRecomputeError).toEqual(expect.stringMatching(/^Could not read the raw file from object storage: .+/));
+    expect(failed.serverRecomputeError).not.toContain('SHA-256');
+    expect(failed.serverResult).toBeNull();
+  });
+
+  it('does not let a failure replace a recomputation that still stands', async () => {
     const scanId = await scanThenUpload(computed);
     const scan = await scanView(scanId);
     await t.app.get(ObjectStorageService).deletePrefix(fileKey(caseId, scan.rawAttachmentId as string));
-    await t.dataSource.query('UPDATE scans SET serverRecomputedAt = NULL WHERE id = ?', [scanId]);
     await t.app.get(ScanRecomputeService).run(scanId);
-    const failed = await scanView(scanId);
-    expect(failed.serverRecomputeError).toEqual(expect.stringMatching(/^Could not read the raw file from object storage: /));
-    expect(failed.serverResult).toBeNull();
+    const after = await scanView(scanId);
+    expect(after).toMatchObject({ serverResult: computed, resultMismatch: false, serverRecomputeError: null, serverRecomputedAt: scan.serverRecomputedAt });
   });
 });

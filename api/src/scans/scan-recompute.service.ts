@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import { isDeepStrictEqual } from 'node:util';
 import { Injectable, Logger } from '@nestjs/common';
 import { DataSource } from 'typeorm';
@@ -46,6 +47,8 @@ export class ScanRecomputeService {
     let stage = 'read the raw file from object storage';
     try {
       const bytes = await this.storage.read(raw.storageKey!);
+      // The file was verified on upload; checked again so a damaged stored copy is never identified.
+      if (createHash('sha256').update(bytes).digest('hex') !== raw.sha256) throw new Error(`the stored file no longer has SHA-256 ${raw.sha256}`);
       stage = 'identify the raw file';
       const { request, parametersFrom } = recomputeRequest(scan);
       const serverResult = scanResultRecord(await this.identify.identifyFile({ originalname: raw.fileName, buffer: bytes }, request));
@@ -70,7 +73,7 @@ export class ScanRecomputeService {
    * Writes the outcome with a new sync sequence number (not a new version: the tablet's edits do not
    * conflict with it), so pulls carry it. Skipped when the scan changed meanwhile (that change queued
    * its own run), when the stored outcome is already the same (re-running changes nothing), and for a
-   * failure after an earlier success on the same scan version.
+   * failure while an earlier success still stands (an acknowledgement keeps it).
    */
   private async store(read: Scan, fields: RecomputedFields): Promise<void> {
     await this.dataSource.transaction(async (manager) => {
@@ -78,7 +81,7 @@ export class ScanRecomputeService {
       const counter = await lockSyncCounter(manager);
       const current = await manager.findOneBy(Scan, { id: read.id });
       if (!current || current.version !== read.version || current.deletedAt) return;
-      // A failure (storage briefly down) never replaces a recomputation that succeeded for this same version.
+      // A failure (storage briefly down) never replaces a recomputation that succeeded for the same inputs.
       if (fields.serverRecomputeError !== null && current.serverRecomputedAt !== null) return;
       const same =
         isDeepStrictEqual(current.serverResult, fields.serverResult) &&
