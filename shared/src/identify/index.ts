@@ -12,3 +12,5 @@ export { MAX_TOLERANCE_CM1 } from './validate-input.js';
 export { identifySpectrum, type IdentifySpectrumOptions } from './identify-spectrum.js';
 export { referenceFor, spectrumCorrelation, MIN_CORRELATION_POINTS } from './correlation.js';
 export { warmUpIdentification } from './warm-up.js';
+export { phaseFit, type PhaseFit } from './phase-fit.js';
+export { hasEscalationEvidence } from './escalation-evidence.js';

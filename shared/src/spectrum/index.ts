@@ -22,6 +22,7 @@ export { spectrumToJcamp, spectrumToCsv } from './export.js';
 export { noiseSigma, median } from './noise.js';
 export { smoothSavitzkyGolay, smoothingNoiseGain, DEFAULT_SMOOTH, type SmoothOptions } from './smooth.js';
 export { estimateBaseline, DEFAULT_BASELINE, type BaselineOptions } from './baseline.js';
+export { keepBroadBands, type BroadBandFit } from './broad-bands.js';
 export { removeSpikes, DEFAULT_SPIKES, type SpikeOptions } from './spikes.js';
 export { detectSaturation, DEFAULT_SATURATION, type SaturationOptions } from './saturation.js';
 export { atrCorrection, DEFAULT_ATR, type AtrOptions } from './atr.js';
