@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import { IonSpinner } from '@ionic/react';
 import { useTranslation } from 'react-i18next';
 import type { IdentifyResult } from '@siteband/shared';
@@ -23,6 +23,10 @@ export default function CapturePage() {
   const [scan, setScan] = useState<ScanSettings>(DEFAULT_SCAN_SETTINGS);
   const { state, processing, setProcessing, chooseFile } = useScanIdentification(identifyClient, scan);
   const [acknowledgedFor, setAcknowledgedFor] = useState<IdentifyResult | null>(null);
+  // Start the worker as the screen opens, so the library indices are built before the first file.
+  useEffect(() => {
+    identifyClient();
+  }, []);
   const outcome: IdentifyOutcome | null = state.status === 'done' ? state.outcome : state.status === 'running' ? state.previous : null;
 
   return (

@@ -2,6 +2,7 @@ import { useMemo, useState } from 'react';
 import { useTranslation } from 'react-i18next';
 import type { IdentifyResult } from '@siteband/shared';
 import type { IdentifyOutcome } from '../../features/identify/protocol';
+import { formatNumber } from '../../features/identify/format';
 import { resultView } from '../../features/identify/resultView';
 import { AcknowledgeCautions } from '../caution/AcknowledgeCautions';
 import { ResultCautions } from '../caution/ResultCautions';
@@ -26,7 +27,7 @@ export interface ScanResultPanelProps {
  * likely compounds with their evidence and caution cards, the cautions, and the acknowledgement.
  */
 export function ScanResultPanel({ outcome, acknowledged, onAcknowledge, onEscalation }: ScanResultPanelProps) {
-  const { t } = useTranslation();
+  const { t, i18n } = useTranslation();
   const { result, plot, processed } = outcome;
   const view = useMemo(() => resultView(result), [result]);
   const [selectedId, setSelectedId] = useState<string | null>(null);
@@ -72,7 +73,11 @@ export function ScanResultPanel({ outcome, acknowledged, onAcknowledge, onEscala
           <h2 id="likely-heading" className="sb-section-title">
             {t('identify.likely.heading')}
           </h2>
-          <p className="sb-muted">{t('identify.likely.intro', { tolerance: result.parameters.toleranceCm1, compounds: result.parameters.libraryCompounds, version: result.libraryVersion.version })}</p>
+          <p className="sb-muted">{t('identify.likely.intro', {
+              tolerance: formatNumber(result.parameters.toleranceCm1, i18n.language),
+              compounds: result.parameters.libraryCompounds,
+              version: result.libraryVersion.version,
+            })}</p>
           {view.mixture && <MixtureSummary mixture={view.mixture} />}
           {candidates.length === 0 ? (
             <p className="sb-notice" data-testid="no-candidates">{t('identify.likely.none')}</p>
