@@ -2,6 +2,7 @@
 import type { Atom, Mat3 } from './types.js';
 import type { PointGroup } from './group-types.js';
 import { apply } from './mat3.js';
+import { AtomMatcher, atomKind } from './atom-matcher.js';
 
 /** Default distance (Å) within which a moved atom must land on an equivalent atom. */
 export const DEFAULT_SYMMETRY_TOLERANCE = 0.05;
@@ -22,39 +23,38 @@ export function validateAtoms(atoms: readonly Atom[]): void {
   });
 }
 
-/** Atoms are equivalent only when element and isotope both match. */
-const sameKind = (a: Atom, b: Atom) => a.element === b.element && a.isotope === b.isotope;
-
-const distance = (p: readonly number[], q: readonly number[]) => Math.hypot(p[0] - q[0], p[1] - q[1], p[2] - q[2]);
-
-/** Index of the atom each atom is sent to by op; throws when some atom has no equivalent partner. */
-export function atomPermutation(op: Mat3, atoms: readonly Atom[], tolerance: number, opName: string, groupName: string): number[] {
-  const used = new Set<number>();
+/**
+ * Index of the atom each atom is sent to by op; throws when some atom has no equivalent partner
+ * within the matcher's tolerance or two atoms land on the same one.
+ */
+function permutationUnder(matcher: AtomMatcher, op: Mat3, atoms: readonly Atom[], opName: string, groupName: string): number[] {
+  const tolerance = matcher.tolerance;
+  const used = new Uint8Array(atoms.length);
   return atoms.map((a, i) => {
     const target = apply(op, a.position);
-    let best = -1;
-    let bestD = Infinity;
-    atoms.forEach((b, j) => {
-      if (!sameKind(a, b)) return;
-      const d = distance(target, b.position);
-      if (d < bestD) [best, bestD] = [j, d];
-    });
-    if (best < 0 || bestD > tolerance || used.has(best)) {
+    const best = matcher.nearest(target, i, tolerance);
+    const within = best >= 0 && matcher.lastDistance <= tolerance;
+    if (!within || used[best]) {
+      // The matcher only looks within the tolerance; the message names the true nearest distance.
+      const bestD = within ? matcher.lastDistance : matcher.nearestDistance(target, i);
       throw new RangeError(
         `structure is not symmetric under ${opName} of ${groupName}: atom ${i + 1} (${a.element}) lands ${bestD.toFixed(3)} Å from the nearest equivalent atom (tolerance ${tolerance} Å); check the point group and the standard orientation`,
       );
     }
-    used.add(best);
+    used[best] = 1;
     return best;
   });
 }
 
 /** Permutation of the atoms under every operation of the group (same order as group.operations). */
 export function atomPermutations(group: PointGroup, atoms: readonly Atom[], tolerance = DEFAULT_SYMMETRY_TOLERANCE): number[][] {
-  return group.operations.map((o) => atomPermutation(o.matrix, atoms, tolerance, group.classes[o.classIndex].label, group.name));
+  const matcher = new AtomMatcher(atoms.map((a) => a.position), atoms.map(atomKind), tolerance);
+  return group.operations.map((o) => permutationUnder(matcher, o.matrix, atoms, group.classes[o.classIndex].label, group.name));
 }
 
 /** Whether the atom is left where it is by op. */
 export function isUnmoved(op: Mat3, atom: Atom, tolerance: number): boolean {
-  return distance(apply(op, atom.position), atom.position) <= tolerance;
+  const p = atom.position;
+  const q = apply(op, p);
+  return Math.hypot(q[0] - p[0], q[1] - p[1], q[2] - p[2]) <= tolerance;
 }

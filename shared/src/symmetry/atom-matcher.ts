@@ -1,6 +1,12 @@
-/** Tests whether an operation maps a set of atoms onto itself, in time linear in the number of atoms. */
-import type { Mat3, Vec3 } from '../types.js';
-import { apply } from '../mat3.js';
+/**
+ * Finds where an operation sends each atom, in time linear in the number of atoms: the one atom
+ * matching used by point-group detection and by the vibrational analysis.
+ */
+import type { Atom, Mat3, Vec3 } from './types.js';
+import { apply } from './mat3.js';
+
+/** Element plus isotope: only atoms of the same kind can be exchanged by an operation. */
+export const atomKind = (a: Atom): string => (a.isotope === undefined ? a.element : `${a.element}-${a.isotope}`);
 
 /** Factor on the tolerance for the first, loose match whose pairs then refine an axis. */
 export const LOOSE = 3;
@@ -71,6 +77,15 @@ export class AtomMatcher {
     }
     this.lastDistance = Math.sqrt(distance);
     return index;
+  }
+
+  /** Distance from q to the nearest atom of the same kind as atom `i`, however far (Infinity if none); a full scan, for error messages. */
+  nearestDistance(q: Vec3, i: number): number {
+    let distance = Infinity;
+    this.positions.forEach((p, j) => {
+      if (this.kinds[j] === this.kinds[i]) distance = Math.min(distance, Math.hypot(p[0] - q[0], p[1] - q[1], p[2] - q[2]));
+    });
+    return distance;
   }
 
   /** Whether op sends every atom to within `limit` (default: the tolerance) of an atom of the same kind. */

@@ -2,7 +2,7 @@
 import type { Vec3 } from '../types.js';
 import { reflection } from '../mat3.js';
 import { confirmRotation } from './element-search.js';
-import type { AtomMatcher } from './matcher.js';
+import type { AtomMatcher } from '../atom-matcher.js';
 import type { Classification } from './classify.js';
 import { cross, dot, unit } from './vec.js';
 

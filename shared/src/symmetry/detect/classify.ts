@@ -1,6 +1,6 @@
 /** The flowchart from found symmetry elements to a Schoenflies group and its standard frame. */
 import type { PlanarConvention, Vec3 } from '../types.js';
-import type { AtomMatcher } from './matcher.js';
+import type { AtomMatcher } from '../atom-matcher.js';
 import type { PreparedStructure } from './prepare.js';
 import { findC2Axes, findMirrors, hasImproper, hasInversion, rotationOrder } from './element-search.js';
 import { best, inPlane, lineScore, momentAbout, perpendicularTowardAtoms, planeScore } from './orientation-rules.js';

@@ -2,7 +2,7 @@
 import type { Atom, Mat3, PlanarConvention, Structure, Vec3 } from '../types.js';
 import { orientAndVerify } from './orient.js';
 import { prepareStructure } from './prepare.js';
-import { AtomMatcher } from './matcher.js';
+import { AtomMatcher } from '../atom-matcher.js';
 import { classify } from './classify.js';
 import { standardOperations } from './group-operations.js';
 import { linearElements, symmetryElements, type SymmetryElement } from './symmetry-elements.js';

@@ -6,7 +6,7 @@
 import type { Vec3 } from '../types.js';
 import type { Mat3 } from '../types.js';
 import { improper, INVERSION, reflection, rotation } from '../mat3.js';
-import { LOOSE, type AtomMatcher } from './matcher.js';
+import { LOOSE, type AtomMatcher } from '../atom-matcher.js';
 import { refineDirection } from './refine.js';
 import type { PreparedStructure } from './prepare.js';
 import { addScaled, cross, distanceFromLine, gcd, sameLine, unit } from './vec.js';

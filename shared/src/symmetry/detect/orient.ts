@@ -1,7 +1,7 @@
 /** Places the centred structure in the standard frame and checks the whole group on it. */
 import type { Mat3, Vec3 } from '../types.js';
 import { apply, mul } from '../mat3.js';
-import { AtomMatcher } from './matcher.js';
+import { AtomMatcher } from '../atom-matcher.js';
 import { polishFrame } from './align.js';
 
 /** The structure in the standard frame with every operation's permutation of the atoms. */

@@ -2,6 +2,7 @@
 import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
 import type { Atom, Structure, Vec3 } from '../types.js';
 import { atomMass } from '../../chem/isotopes.js';
+import { atomKind } from '../atom-matcher.js';
 
 /** A structure moved to its centre of mass, with what the search needs to know about it. */
 export interface PreparedStructure {
@@ -30,7 +31,7 @@ export function prepareStructure(structure: Structure, tolerance: number): Prepa
   const total = masses.reduce((s, m) => s + m, 0);
   const centre = [0, 1, 2].map((k) => atoms.reduce((s, a, i) => s + masses[i] * a.position[k], 0) / total) as unknown as Vec3;
   const positions = atoms.map((a): Vec3 => [a.position[0] - centre[0], a.position[1] - centre[1], a.position[2] - centre[2]]);
-  const kinds = atoms.map((a) => `${a.element}${a.isotope === undefined ? '' : `-${a.isotope}`}`);
+  const kinds = atoms.map(atomKind);
 
   const t = Matrix.zeros(3, 3);
   positions.forEach((r, i) => {
