@@ -25,15 +25,18 @@ export function principalAxes(atoms: readonly Atom[], massOf: (atom: Atom) => nu
     for (let p = 0; p < 3; p++) for (let q = 0; q < 3; q++) t.set(p, q, t.get(p, q) + masses[i] * ((p === q ? r2 : 0) - r[p] * r[q]));
   });
   const eig = new EigenvalueDecomposition(t, { assumeSymmetric: true });
-  const order = [0, 1, 2].sort((p, q) => eig.realEigenvalues[p] - eig.realEigenvalues[q]);
+  // ml-matrix's getters copy on every access: read them once.
+  const values = eig.realEigenvalues;
+  const vectors = eig.eigenvectorMatrix;
+  const order = [0, 1, 2].sort((p, q) => values[p] - values[q]);
   const names = ['a', 'b', 'c'] as const;
   const nearest = (k: number) => {
     // The inertial axis with the largest projection on Cartesian axis k.
-    const w = order.map((col) => Math.abs(eig.eigenvectorMatrix.get(k, col)));
+    const w = order.map((col) => Math.abs(vectors.get(k, col)));
     return names[w.indexOf(Math.max(...w))];
   };
   return {
-    moments: order.map((col) => eig.realEigenvalues[col]) as unknown as [number, number, number],
+    moments: order.map((col) => values[col]) as unknown as [number, number, number],
     axisOf: { x: nearest(0), y: nearest(1), z: nearest(2) },
   };
 }
