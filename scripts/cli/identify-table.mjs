@@ -14,6 +14,7 @@ export function printIdentifyTable(r) {
     out.push(`  ${String(c.rank).padStart(2)}. ${c.name} (CAS ${c.cas})  ${fmt(c.score, 2)}${hazard}${c.listedForCaution ? '  (listed for caution)' : ''}`);
     out.push(`      explained peaks: ${c.explained.map((e) => `${fmt(e.x)}↔${fmt(e.expectedCm1, 0)}${e.label ? ` ${e.label}` : ''}`).join(', ') || 'none'}`);
     if (c.missing.length) out.push(`      missing bands: ${c.missing.map((m) => `${fmt(m.expectedCm1, 0)}${m.label ? ` ${m.label}` : ''}`).join(', ')}`);
+    if (c.phaseMismatch) out.push(`      phase fit: ${c.phaseMismatch}`);
     if (c.against.length) out.push(`      evidence against: ${c.against.map((a) => `${fmt(a.x)} (${a.reason})`).join(', ')}`);
   }
   if (r.mixture) {
