@@ -53,6 +53,8 @@ export function identifyTests({ baseUrl, password }) {
       await openTab(page, 'Capture');
       const status = page.getByTestId('instrument-check-status').last();
       assert.match(await status.textContent(), /No instrument check on this tablet for IR/);
+      await assertAccessible(page, 'the scan screen before any scan');
+      await screenshot(page, 'inspector-capture-scan-start');
       await status.locator('ion-button', { hasText: 'Instrument check' }).click();
       await waitForPage(page, 'Instrument check');
       await page.getByLabel('Polystyrene film, mid-IR (FT instruments) (IR)').check();

@@ -3,6 +3,7 @@ import { CautionCardView } from '../caution/CautionCardView';
 import type { CandidateView } from '../../features/identify/resultView';
 import { formatAgreement, formatCm1, formatOffsetCm1, formatShare } from '../../features/identify/format';
 import { BandTable } from './BandTable';
+import './results.css';
 
 export interface CandidateCardProps {
   readonly view: CandidateView;

@@ -4,6 +4,7 @@ import { useTranslation } from 'react-i18next';
 import type { Technique } from '@siteband/shared';
 import { useLatestInstrumentCheck } from '../../features/identify/instrumentChecks';
 import { formatDateTime } from '../../i18n/format';
+import './scan-form.css';
 
 /** Path of the instrument check screen under the Capture tab. */
 export const INSTRUMENT_CHECK_PATH = '/tabs/capture/instrument-check';

@@ -1,6 +1,7 @@
 import { useTranslation } from 'react-i18next';
 import type { BandCheck } from '@siteband/shared';
 import { formatCm1, formatOffsetCm1 } from '../../features/identify/format';
+import './results.css';
 
 /** Each reference band of a check: expected, found, offset, tolerance with its source, and the outcome. */
 export function InstrumentCheckTable({ bands }: { bands: readonly BandCheck[] }) {

@@ -4,6 +4,7 @@ import { useTranslation } from 'react-i18next';
 import type { ProcessParameters } from '@siteband/shared';
 import type { ProcessingSettings } from '../../features/identify/scanSettings';
 import { formatNumber } from '../../features/identify/format';
+import './scan-form.css';
 
 export interface ProcessingPanelProps {
   /** What the pipeline used on the last run, shown as the starting values. */

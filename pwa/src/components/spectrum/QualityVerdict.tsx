@@ -2,6 +2,7 @@ import { IonIcon } from '@ionic/react';
 import { alertCircleOutline, pulseOutline } from 'ionicons/icons';
 import { useTranslation } from 'react-i18next';
 import { formatNumber } from '../../features/identify/format';
+import './results.css';
 
 export interface QualityVerdictProps {
   readonly snr: number;

@@ -3,6 +3,7 @@ import { IonIcon } from '@ionic/react';
 import { documentAttachOutline } from 'ionicons/icons';
 import { useTranslation } from 'react-i18next';
 import type { ScanFile } from '../../features/identify/protocol';
+import './scan-form.css';
 
 /** File types the import reads: JCAMP-DX and delimited text. */
 const ACCEPT = '.jdx,.dx,.jcamp,.jcm,.csv,.tsv,.txt,text/csv,text/plain';

@@ -10,7 +10,7 @@ import { CandidateCard } from './CandidateCard';
 import { LazySpectrumPlot } from './LazySpectrumPlot';
 import { MixtureSummary } from './MixtureSummary';
 import { QualityVerdict } from './QualityVerdict';
-import './spectrum.css';
+import './results.css';
 
 export interface ScanResultPanelProps {
   readonly outcome: IdentifyOutcome;

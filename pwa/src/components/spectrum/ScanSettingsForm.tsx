@@ -2,6 +2,7 @@ import { useId } from 'react';
 import { useTranslation } from 'react-i18next';
 import type { Phase, Technique } from '@siteband/shared';
 import { COMMON_EXCITATIONS_NM, type ScanSettings } from '../../features/identify/scanSettings';
+import './scan-form.css';
 
 export interface ScanSettingsFormProps {
   readonly value: ScanSettings;

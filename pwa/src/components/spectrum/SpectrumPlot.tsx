@@ -8,7 +8,7 @@ import type { Technique } from '@siteband/shared';
 import type { PlotData } from '../../features/identify/protocol';
 import { formatCm1 } from '../../features/identify/format';
 import { spectrumPlotOptions, themeColours, type Markers } from './plotOptions';
-import './spectrum.css';
+import './plot.css';
 
 export interface SpectrumPlotProps {
   readonly plot: PlotData;
