@@ -4,17 +4,14 @@
  * the three can never disagree.
  */
 import { parseStructure, type StructureFormat } from '../structure/index.js';
-import { detectPointGroup, type PointGroupDetection, type SymmetryElement } from '../symmetry/detect/index.js';
-import { analyseVibrations, type VibrationalAnalysis } from '../symmetry/analyse.js';
+import type { PointGroupDetection, SymmetryElement } from '../symmetry/detect/index.js';
+import type { VibrationalAnalysis } from '../symmetry/analyse.js';
 import type { Atom, PlanarConvention } from '../symmetry/types.js';
+import { analyseStructure, type AnalyseStructureOptions } from './analyse-structure.js';
 
-export interface StructureCheckOptions {
+export interface StructureCheckOptions extends AnalyseStructureOptions {
   /** Structure format; detected from the text when absent. */
   readonly format?: StructureFormat;
-  /** Å, default 0.1: how far an atom may sit from its symmetric position. */
-  readonly tolerance?: number;
-  /** Plane of a planar C2v or D2h molecule: `yz` (Mulliken 1955, default) or `xz`. */
-  readonly convention?: PlanarConvention;
 }
 
 /** A symmetry element as JSON: `order` is null for the infinite axis of a linear molecule. */
@@ -50,15 +47,8 @@ export interface StructureCheck extends Omit<VibrationalAnalysis, 'pointGroup' |
 /** Runs the whole structure check on structure text (XYZ or MOL V2000); throws StructureError or RangeError on bad input. */
 export function checkStructure(text: string, options: StructureCheckOptions = {}): StructureCheck {
   const structure = parseStructure(text, options.format);
-  const detection = detectPointGroup(structure, {
-    ...(options.tolerance !== undefined ? { tolerance: options.tolerance } : {}),
-    ...(options.convention !== undefined ? { convention: options.convention } : {}),
-    // Exact positions let the vibrational analysis use its tight default tolerance on noisy input.
-    symmetrise: true,
-  });
-  const { pointGroup, atoms, ...analysis } = analyseVibrations(detection.pointGroup, detection.oriented, {
-    ...(structure.bonds ? { bonds: structure.bonds } : {}),
-  });
+  const { detection, analysis: full } = analyseStructure(structure, options);
+  const { pointGroup, atoms, ...analysis } = full;
   return {
     title: structure.title ?? null,
     pointGroup,
