@@ -3,6 +3,7 @@ import { useTranslation } from 'react-i18next';
 import { elementSummary } from '../../features/structure/elementSummary';
 import { formatNumber } from '../../features/structure/formatNumber';
 import { gammaFormula } from '../../features/structure/gammaFormula';
+import { MoleculeView } from './MoleculeView';
 
 /** Point group in large type, the molecule's facts, Γvib and the activity counts. */
 export function StructureSummary({ check }: { check: StructureCheck }) {
@@ -25,6 +26,8 @@ export function StructureSummary({ check }: { check: StructureCheck }) {
           Γ<sub>vib</sub> = <span data-testid="structure-gamma-vib">{gammaFormula(v.modes)}</span>
         </p>
       </div>
+      <div className="sb-summary-body">
+      <MoleculeView check={check} />
       <dl className="sb-facts">
         <dt>{t('library.structure.order')}</dt>
         <dd>{check.order === null ? '∞' : n(check.order)}</dd>
@@ -39,6 +42,7 @@ export function StructureSummary({ check }: { check: StructureCheck }) {
         <dt>{t('library.structure.maxDeviation')}</dt>
         <dd>{t('library.structure.angstrom', { value: formatNumber(check.orientation.maxDeviation, i18n.language, 4) })}</dd>
       </dl>
+      </div>
       <ul className="sb-counts" aria-label={t('library.structure.countsLabel')}>
         <li data-testid="count-fundamentals">
           <strong>{n(v.fundamentals)}</strong> {t('library.structure.countFundamentals')}
