@@ -3,6 +3,7 @@
 import assert from 'node:assert/strict';
 import { after, before, describe, it } from 'node:test';
 import { blockingViolations } from './axe.mjs';
+import { captureTests } from './capture.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
 import { identifyTests } from './identify.mjs';
 import { libraryTests } from './library.mjs';
@@ -287,3 +288,4 @@ describe('offline', { concurrency: false }, () => {
 
 identifyTests({ baseUrl: BASE_URL, password: PASSWORD });
 libraryTests({ baseUrl: BASE_URL, password: PASSWORD });
+captureTests({ baseUrl: BASE_URL, password: PASSWORD });

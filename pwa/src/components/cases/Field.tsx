@@ -27,10 +27,7 @@ export function Field({ label, value, onChange, type = 'text', multiline = false
   };
   return (
     <div className="sb-field">
-      <label htmlFor={id}>
-        {label}
-        {required && <span aria-hidden="true"> *</span>}
-      </label>
+      <label htmlFor={id}>{label}</label>
       {multiline ? (
         <textarea {...common} rows={3} onChange={(e) => onChange(e.target.value)} />
       ) : (

@@ -49,6 +49,7 @@ export function LocationFields({ draft, onChange }: { draft: CaseDraft; onChange
           onChange={(longitude) => onChange({ longitude, enteredByHand: true, accuracyM: '' })}
         />
       </div>
+      <p className="sb-field__hint">{t('capture.case.coordinatesHint')}</p>
     </fieldset>
   );
 }
