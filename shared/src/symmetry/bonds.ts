@@ -26,44 +26,64 @@ export function deriveBonds(atoms: readonly Atom[], radiusOf: (element: string) 
     if (r === undefined || !(r > 0)) throw new RangeError(`atom ${i + 1}: no covalent radius known for element ${a.element}`);
     return r;
   });
-  const cutoff = factor * 2 * Math.max(...radii);
-  const cells = cellIndex(atoms, cutoff);
+  const cutoff = factor * 2 * radii.reduce((m, r) => Math.max(m, r), 0);
+  const grid = new CellGrid(atoms.map((a) => a.position), cutoff);
   const bonds: Bond[] = [];
   atoms.forEach((a, i) => {
     const p = a.position;
-    // Only the 27 cells around the atom can hold a partner: bonded pairs are never farther apart than the cutoff.
-    const partners: number[] = [];
-    for (const j of neighbours(cells, p, cutoff)) {
-      if (j <= i) continue;
+    // Bonded atoms are never farther apart than the cutoff, so only the 27 cells around p can hold a partner.
+    const partners = grid.around(p).filter((j) => {
+      if (j <= i) return false;
       const q = atoms[j].position;
-      const d = Math.hypot(p[0] - q[0], p[1] - q[1], p[2] - q[2]);
-      if (d <= factor * (radii[i] + radii[j])) partners.push(j);
-    }
+      return Math.hypot(p[0] - q[0], p[1] - q[1], p[2] - q[2]) <= factor * (radii[i] + radii[j]);
+    });
     for (const j of partners.sort((x, y) => x - y)) bonds.push([i, j]);
   });
   return bonds;
 }
 
-const cellKey = (ix: number, iy: number, iz: number) => `${ix},${iy},${iz}`;
+/** Point indices by cubic cell of a given edge, numbered exactly within the points' bounding box. */
+class CellGrid {
+  private readonly cells = new Map<number, number[]>();
+  private readonly low: number[];
+  private readonly span: number[];
 
-/** Atom indices by cubic cell of edge `size`. */
-function cellIndex(atoms: readonly Atom[], size: number): Map<string, number[]> {
-  const cells = new Map<string, number[]>();
-  atoms.forEach((a, i) => {
-    const key = cellKey(...(a.position.map((x) => Math.floor(x / size)) as [number, number, number]));
-    const list = cells.get(key);
-    if (list) list.push(i);
-    else cells.set(key, [i]);
-  });
-  return cells;
-}
+  constructor(
+    positions: readonly (readonly number[])[],
+    private readonly size: number,
+  ) {
+    this.low = [0, 1, 2].map((c) => positions.reduce((m, p) => Math.min(m, p[c]), Infinity));
+    const high = [0, 1, 2].map((c) => positions.reduce((m, p) => Math.max(m, p[c]), -Infinity));
+    // One spare cell on each side, so the neighbours of every occupied cell have their own numbers.
+    this.span = [0, 1, 2].map((c) => Math.floor((high[c] - this.low[c]) / size) + 3);
+    positions.forEach((p, i) => {
+      const key = this.key(this.cell(p, 0), this.cell(p, 1), this.cell(p, 2));
+      const list = this.cells.get(key);
+      if (list) list.push(i);
+      else this.cells.set(key, [i]);
+    });
+  }
 
-/** Indices of the atoms in the cell of p and its 26 neighbours. */
-function* neighbours(cells: Map<string, number[]>, p: readonly number[], size: number): Generator<number> {
-  const [cx, cy, cz] = p.map((x) => Math.floor(x / size));
-  for (let ix = cx - 1; ix <= cx + 1; ix++) {
-    for (let iy = cy - 1; iy <= cy + 1; iy++) {
-      for (let iz = cz - 1; iz <= cz + 1; iz++) yield* cells.get(cellKey(ix, iy, iz)) ?? [];
+  private cell(p: readonly number[], c: number): number {
+    return Math.floor((p[c] - this.low[c]) / this.size) + 1;
+  }
+
+  private key(ix: number, iy: number, iz: number): number {
+    return (ix * this.span[1] + iy) * this.span[2] + iz;
+  }
+
+  /** Indices of the points in the cell of p (a point of the grid) and its 26 neighbours. */
+  around(p: readonly number[]): number[] {
+    const [cx, cy, cz] = [this.cell(p, 0), this.cell(p, 1), this.cell(p, 2)];
+    const out: number[] = [];
+    for (let ix = cx - 1; ix <= cx + 1; ix++) {
+      for (let iy = cy - 1; iy <= cy + 1; iy++) {
+        for (let iz = cz - 1; iz <= cz + 1; iz++) {
+          const list = this.cells.get(this.key(ix, iy, iz));
+          if (list) out.push(...list);
+        }
+      }
     }
+    return out;
   }
 }
