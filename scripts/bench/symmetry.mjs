@@ -1,12 +1,13 @@
 // Speed of point-group detection and of detection plus full Γvib at 3, 12, 60, 200 and 1,000 atoms,
 // side by side with pymatgen's PointGroupAnalyzer on the same geometries (Debian's python3-pymatgen,
-// spawned once; its times are measured inside Python, so start-up is not counted). Plain Node ESM
-// against the built shared package:
+// spawned once; its times are measured inside Python, so start-up is not counted), with the machine's
+// load average, since a loaded machine slows both sides. Plain Node ESM against the built shared package:
 //   npm run build -w shared && node scripts/bench/symmetry.mjs [runs]
 // The 200- and 1,000-atom structures are synthetic point grids (D4h, Oh); the others are H2O and
 // benzene from ASE's G2 set and C60 from fixtures/molecules.
 import { spawnSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
+import { availableParallelism, loadavg } from 'node:os';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { parseXyz } from '../../shared/dist/structure/index.js';
 import { detectPointGroup } from '../../shared/dist/symmetry/detect/index.js';
@@ -40,14 +41,9 @@ const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 /**
  * Median of `runs` timed batches (ms per call). Each batch repeats fn until it has taken 50 ms, so
  * sub-millisecond calls are not lost in timer noise; 200 ms of warm-up calls first (JIT, and the
- * catalogue's first build of the group). `once` times a single call without warm-up.
+ * catalogue's first build of the group).
  */
-function time(fn, runs, once = false) {
-  if (once) {
-    const t0 = performance.now();
-    fn();
-    return performance.now() - t0;
-  }
+function time(fn, runs) {
   const warm = performance.now();
   do fn();
   while (performance.now() - warm < 200);
@@ -77,32 +73,39 @@ function pymatgenTimes(molecules) {
   return { answers: new Map(JSON.parse(run.stdout).map((a) => [a.name, a])) };
 }
 
-/** Prints the table of detection and Γvib times against pymatgen. */
+const load = () => loadavg().map((x) => x.toFixed(2)).join(', ');
+
+/** Prints the table of detection and Γvib times against pymatgen, with the load average before and after. */
 export function runSymmetryBench(runs = 5) {
+  const loadBefore = load();
   const molecules = benchMolecules();
   const py = pymatgenTimes(molecules);
   if (py.error) console.log(`pymatgen not available (${py.error}); showing our times only`);
   const rows = molecules.map(([name, structure]) => {
-    const n = structure.atoms.length;
     let detection;
     const detectMs = time(() => (detection = detectPointGroup(structure, { symmetrise: true })), runs);
-    // Γvib without internal coordinates: their bond search is not part of the comparison.
-    const gammaMs = time(() => analyseVibrations(detection.pointGroup, detection.oriented, { covalentRadius: null }), runs, n >= 1000);
+    // Γvib, activity and band types without internal coordinates: pymatgen finds no bonds either.
+    const gammaMs = time(() => analyseVibrations(detection.pointGroup, detection.oriented, { covalentRadius: null }), runs);
+    // The structure check's own composition also derives bonds and their symmetry-adapted combinations.
+    const stretchMs = time(() => analyseVibrations(detection.pointGroup, detection.oriented), runs);
     const theirs = py.answers?.get(name);
     const pyMs = theirs ? theirs.seconds * 1000 : undefined;
+    const theirGroup = theirs ? theirs.pointGroup.replace('*', '∞') : '–';
     return {
       structure: name,
-      atoms: n,
-      ours: detection.pointGroup,
-      pymatgen: theirs ? theirs.pointGroup.replace('*', '∞') : '–',
-      'detect ms': detectMs.toFixed(2),
-      'detect+Γvib ms': (detectMs + gammaMs).toFixed(1),
-      'pymatgen ms': pyMs === undefined ? '–' : pyMs.toFixed(2),
-      'pymatgen / detect': pyMs === undefined ? '–' : `${(pyMs / detectMs).toFixed(1)}×`,
-      'pymatgen / (detect+Γvib)': pyMs === undefined ? '–' : `${(pyMs / (detectMs + gammaMs)).toFixed(2)}×`,
+      atoms: structure.atoms.length,
+      ours: `${detection.pointGroup} (${Number.isFinite(detection.order) ? detection.order : '∞'} ops)`,
+      pymatgen: theirs ? `${theirGroup} (${theirs.operations} ops)` : '–',
+      'same group': theirs ? (theirGroup === detection.pointGroup ? 'yes' : 'NO') : '–',
+      'detection ms': detectMs.toFixed(2),
+      'detection + Γvib ms': (detectMs + gammaMs).toFixed(2),
+      'with bond stretches ms': (detectMs + stretchMs).toFixed(1),
+      'pymatgen ms': pyMs === undefined ? '–' : pyMs.toFixed(1),
+      'pymatgen / ours (detection + Γvib)': pyMs === undefined ? '–' : `${(pyMs / (detectMs + gammaMs)).toFixed(1)}×`,
     };
   });
-  console.log(`Point-group detection with symmetrisation, and Γvib by analyseVibrations (median of ${runs} batches after warm-up; the 1,000-atom Γvib timed once). pymatgen: median of 5 runs, 1 at 1,000 atoms.`);
+  console.log(`Point-group detection with symmetrisation, then Γvib by analyseVibrations (median of ${runs} batches after warm-up). pymatgen: median of 5 runs, 1 at 1,000 atoms.`);
+  console.log(`Load average (1, 5, 15 min) on ${availableParallelism()} cores: ${loadBefore} before, ${load()} after.`);
   console.table(rows);
   return rows;
 }
