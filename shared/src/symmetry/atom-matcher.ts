@@ -53,14 +53,21 @@ export class AtomMatcher {
     let index = -1;
     let distance = Infinity;
     const c = this.cell;
-    const [x0, x1] = [Math.floor((q[0] - radius) / c), Math.floor((q[0] + radius) / c)];
-    const [y0, y1] = [Math.floor((q[1] - radius) / c), Math.floor((q[1] + radius) / c)];
-    const [z0, z1] = [Math.floor((q[2] - radius) / c), Math.floor((q[2] + radius) / c)];
+    // Plain locals, no destructured pairs: this is the hot loop of detection and analysis alike.
+    const x0 = Math.floor((q[0] - radius) / c);
+    const x1 = Math.floor((q[0] + radius) / c);
+    const y0 = Math.floor((q[1] - radius) / c);
+    const y1 = Math.floor((q[1] + radius) / c);
+    const z0 = Math.floor((q[2] - radius) / c);
+    const z1 = Math.floor((q[2] + radius) / c);
+    const kind = this.kinds[i];
     for (let ix = x0; ix <= x1; ix++) {
       for (let iy = y0; iy <= y1; iy++) {
         for (let iz = z0; iz <= z1; iz++) {
-          for (const j of this.grid.get(this.key(ix, iy, iz)) ?? []) {
-            if (this.kinds[j] !== this.kinds[i]) continue;
+          const list = this.grid.get(this.key(ix, iy, iz));
+          if (list === undefined) continue;
+          for (const j of list) {
+            if (this.kinds[j] !== kind) continue;
             const p = this.positions[j];
             const dx = p[0] - q[0];
             const dy = p[1] - q[1];
