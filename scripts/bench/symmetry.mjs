@@ -40,13 +40,14 @@ const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
 /**
  * Median of `runs` timed batches (ms per call). Each batch repeats fn until it has taken 50 ms, so
- * sub-millisecond calls are not lost in timer noise; 200 ms of warm-up calls first (JIT, and the
- * catalogue's first build of the group).
+ * sub-millisecond calls are not lost in timer noise; 1 s of warm-up calls first (the catalogue's first
+ * build of the group, and V8 optimising the hot loops: on a loaded machine that takes over a second
+ * for a 3-atom structure, while pymatgen's interpreted code has no such start).
  */
 function time(fn, runs) {
   const warm = performance.now();
   do fn();
-  while (performance.now() - warm < 200);
+  while (performance.now() - warm < 1000);
   const perCall = [];
   for (let r = 0; r < runs; r++) {
     let calls = 0;
