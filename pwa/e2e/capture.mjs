@@ -245,6 +245,47 @@ export function captureTests({ baseUrl, password }) {
       assert.equal(detail.samples.length, 1);
       assert.equal(detail.handovers.length, 1);
       assert.equal(detail.attachments.length, 2);
+    });
+
+    it('shows both copies when the case changed on the server too, and "keep mine" sends the tablet copy on top', async () => {
+      const { page } = browser;
+      const before = (await (await api(`/api/cases/${caseId}`, token)).json()).case;
+      const fields = ['siteName', 'address', 'latitude', 'longitude', 'locationAccuracyM', 'locationEnteredByHand', 'startedAt', 'weatherNotes', 'accessNotes', 'status'];
+      const data = Object.fromEntries(fields.filter((f) => f in before).map((f) => [f, before[f]]));
+      // Another tablet of the same inspector changes the weather first.
+      const other = await fetch(`${baseUrl}/api/sync/push`, {
+        method: 'POST',
+        headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${token}` },
+        body: JSON.stringify({
+          clientId: 'e2e-second-tablet',
+          batchId: crypto.randomUUID(),
+          changes: [{ changeId: crypto.randomUUID(), entity: 'case', op: 'upsert', id: caseId, baseVersion: before.version, data: { ...data, weatherNotes: 'Heavy rain from noon' } }],
+        }),
+      });
+      assert.equal((await other.json()).results[0].status, 'applied');
+
+      await page.locator('ion-button', { hasText: 'Edit visit details' }).filter({ visible: true }).click();
+      await waitForPage(page, 'Edit case');
+      await page.getByLabel('Weather', { exact: true }).filter({ visible: true }).fill('Drizzle, wind from the east');
+      await page.getByRole('button', { name: 'Save case' }).filter({ visible: true }).click();
+      await waitForPage(page, SITE);
+      await page.getByTestId('sync-now').filter({ visible: true }).click();
+      const conflicts = page.getByTestId('conflicts').filter({ visible: true });
+      await conflicts.waitFor();
+      assert.match(await conflicts.textContent(), /Heavy rain from noon/);
+      assert.match(await conflicts.textContent(), /Drizzle, wind from the east/);
+      assert.equal((await page.getByTestId('case-sync').filter({ visible: true }).textContent()).trim(), 'Conflict');
+      await assertAccessible(page, 'the case page with a conflict');
+      await screenshot(page, 'capture-case-conflict-800x1280');
+
+      await conflicts.getByRole('button', { name: 'Keep mine' }).click();
+      await page.getByTestId('sync-now').filter({ visible: true }).click();
+      await waitForSynced(page);
+      await page.getByTestId('case-sync').filter({ visible: true, hasText: 'On server' }).waitFor();
+      const after = (await (await api(`/api/cases/${caseId}`, token)).json()).case;
+      assert.equal(after.weatherNotes, 'Drizzle, wind from the east');
+      assert.equal(after.version, before.version + 2);
+
       await openTab(page, 'Cases');
       await page.getByTestId(`case-${caseId}`).filter({ hasText: 'On server' }).waitFor();
       await screenshot(page, 'capture-cases-synced-800x1280');

@@ -4,6 +4,7 @@ import { captureDb } from '../../features/cases/captureDb';
 import { tabletData } from '../../features/sync/captureTables';
 import { resolveConflict } from '../../features/sync/resolveConflict';
 import { useConflicts } from '../../features/sync/useConflicts';
+import { ConflictTable } from './ConflictTable';
 
 /** Each conflict of the case with both copies side by side and the two choices. */
 export function ConflictPanel({ caseId }: { caseId: string }) {
@@ -22,16 +23,11 @@ export function ConflictPanel({ caseId }: { caseId: string }) {
         return (
           <article key={row.id} className="sb-conflict">
             <h3>{t(`capture.entity.${entity}`)}</h3>
-            <div className="sb-conflict__columns">
-              <div>
-                <h4>{t('capture.conflict.mine')}</h4>
-                <pre>{JSON.stringify(row.data, null, 2)}</pre>
-              </div>
-              <div>
-                <h4>{t('capture.conflict.server', { version: server?.version ?? '?' })}</h4>
-                <pre>{fields ? JSON.stringify(fields, null, 2) : t('capture.conflict.serverMissing')}</pre>
-              </div>
-            </div>
+            {fields ? (
+              <ConflictTable mine={row.data as Record<string, unknown>} server={fields} serverVersion={server!.version} />
+            ) : (
+              <p className="sb-muted">{t('capture.conflict.serverMissing')}</p>
+            )}
             <div className="sb-button-row">
               <IonButton className="sb-primary" disabled={!server} onClick={() => void resolveConflict(captureDb(), entity, row.id, 'mine')}>
                 {t('capture.conflict.keepMine')}
