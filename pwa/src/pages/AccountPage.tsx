@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { IonButton, IonIcon } from '@ionic/react';
-import { logOutOutline } from 'ionicons/icons';
+import { flaskOutline, logOutOutline, shapesOutline } from 'ionicons/icons';
 import { useTranslation } from 'react-i18next';
 import { PageShell } from '../components/PageShell';
 import { ThemeChooser } from '../components/ThemeChooser';
@@ -57,6 +57,24 @@ export default function AccountPage() {
           <dd data-testid="offline-until">{offlineUntil === undefined ? '' : formatDateTime(offlineUntil, language)}</dd>
         </dl>
       </section>
+
+      {session.user.role !== 'supervisor' && (
+        // Supervisors have these in their own tab; everyone else may consult them read-only.
+        <section className="sb-panel" aria-labelledby="reference-heading">
+          <h2 id="reference-heading" className="sb-panel__heading">
+            {t('pages.account.referenceHeading')}
+          </h2>
+          <p className="sb-muted">{t('pages.account.referenceHint')}</p>
+          <IonButton fill="outline" routerLink="/tabs/account/library">
+            <IonIcon icon={flaskOutline} slot="start" aria-hidden="true" />
+            {t('pages.account.openLibrary')}
+          </IonButton>
+          <IonButton fill="outline" routerLink="/tabs/account/library/structure">
+            <IonIcon icon={shapesOutline} slot="start" aria-hidden="true" />
+            {t('pages.account.openStructureCheck')}
+          </IonButton>
+        </section>
+      )}
 
       <section className="sb-panel" aria-labelledby="display-heading">
         <h2 id="display-heading" className="sb-panel__heading">
