@@ -80,6 +80,21 @@ describe('bond stretches as internal coordinates', () => {
     expect(combos.E[0].map((x) => Math.round(x * 1e4) / 1e4)).toEqual([0.8165, -0.4082, -0.4082]);
   });
 
+  it('benzene and C60 combinations: one per bond, orthonormal across all bonds, each on one set of equivalent bonds', () => {
+    for (const [name, maxDistance] of [['benzene', 1.5], ['C60', 1.5]] as const) {
+      const atoms = MOLECULES[name].atoms;
+      const bonds = bondsWithin(atoms, maxDistance);
+      const r = analyse(name, bonds);
+      const combos = r.internalCoordinates!.combinations.flatMap((c) => c.combinations);
+      expect(combos).toHaveLength(bonds.length);
+      const dot = (a: readonly number[], b: readonly number[]) => a.reduce((s, x, i) => s + x * b[i], 0);
+      combos.forEach((a, i) => combos.forEach((b, j) => expect(dot(a, b)).toBeCloseTo(i === j ? 1 : 0, 4)));
+      // Bonds of one length are the equivalent ones here (C–H vs C–C; C60's shorter and longer edges).
+      const length = ([i, j]: readonly [number, number]) => Math.round(Math.hypot(...atoms[i].position.map((x, c) => x - atoms[j].position[c])) * 100);
+      for (const c of combos) expect(new Set(bonds.filter((_, k) => c[k] !== 0).map(length)).size).toBe(1);
+    }
+  });
+
   it('derives bonds by default from Cordero et al. (2008) radii × 1.2: O–H bonded, H···H not', () => {
     const r = analyseVibrations('C2v', MOLECULES.H2O.atoms);
     expect(r.internalCoordinates!.bonds).toEqual([[0, 1], [0, 2]]);
