@@ -6,7 +6,7 @@ import { JSON_BODY_LIMIT_BYTES } from '../src/common/body-limit';
 
 const FIXTURES = join(__dirname, '../../fixtures/spectra');
 const read = (name: string) => readFileSync(join(FIXTURES, name));
-const irExample = read('ir-example.csv');
+const irExample = read('synthetic-ir-ethanol-liquid.csv');
 
 /** mulberry32: a small seeded PRNG, so every run posts the same mutated files. */
 function prng(seed: number): () => number {
@@ -31,7 +31,7 @@ function mutants(count: number, seed: number): Mutant[] {
   const random = prng(seed);
   const pick = <T>(items: readonly T[]): T => items[Math.floor(random() * items.length)]!;
   const bases = [
-    { fileName: 'ir-example.csv', text: irExample.toString('utf8'), technique: 'ir' as const },
+    { fileName: 'synthetic-ir-ethanol-liquid.csv', text: irExample.toString('utf8'), technique: 'ir' as const },
     { fileName: 'two-blocks.jdx', text: read('synthetic-two-blocks.jdx').toString('utf8'), technique: 'ir' as const },
     { fileName: 'raman.csv', text: read('synthetic-raman-semicolon.csv').toString('utf8'), technique: 'raman' as const },
     { fileName: 'headerless.txt', text: read('synthetic-ir-headerless.txt').toString('utf8'), technique: 'ir' as const },
@@ -62,7 +62,7 @@ function mutants(count: number, seed: number): Mutant[] {
   const names = Object.keys(mutations);
   // Two huge files only: each is a 20 MiB upload.
   const huge = (fileName: string): Mutant => ({ name: `huge:${fileName}`, bytes: Buffer.alloc(DEFAULT_MAX_IMPORT_BYTES + 1 + Math.floor(random() * 1000), 0x39), fileName, technique: 'ir' });
-  return [huge('ir-example.csv'), huge('two-blocks.jdx')].concat(Array.from({ length: count - 2 }, (_, i) => {
+  return [huge('synthetic-ir-ethanol-liquid.csv'), huge('two-blocks.jdx')].concat(Array.from({ length: count - 2 }, (_, i) => {
     const base = pick(bases);
     const kind = names[i % names.length]!;
     const out = mutations[kind]!(base.text);
@@ -91,17 +91,17 @@ describe('Identification (e2e, MariaDB)', () => {
   });
 
   it('refuses to answer without a token (401)', async () => {
-    const response = await t.http().post('/api/identify').field('technique', 'ir').field('phase', 'condensed').attach('file', irExample, 'ir-example.csv');
+    const response = await t.http().post('/api/identify').field('technique', 'ir').field('phase', 'condensed').attach('file', irExample, 'synthetic-ir-ethanol-liquid.csv');
     expect(response.status).toBe(401);
     expectErrorShape(response.body, 401, '/api/identify');
   });
 
   it.each(ROLES)('ranks an uploaded IR file for %s, exactly as the shared code does offline', async (role) => {
-    const response = await upload(role, irExample, 'ir-example.csv').expect(200);
-    const { processed, result } = identifySpectrum(importSpectrum(new Uint8Array(irExample), { fileName: 'ir-example.csv', technique: 'ir' }), {
+    const response = await upload(role, irExample, 'synthetic-ir-ethanol-liquid.csv').expect(200);
+    const { processed, result } = identifySpectrum(importSpectrum(new Uint8Array(irExample), { fileName: 'synthetic-ir-ethanol-liquid.csv', technique: 'ir' }), {
       process: { technique: 'ir', phase: 'condensed' },
     });
-    expect(response.body).toEqual(JSON.parse(JSON.stringify({ file: 'ir-example.csv', ...result, quality: processed.quality, processing: processed.parameters })));
+    expect(response.body).toEqual(JSON.parse(JSON.stringify({ file: 'synthetic-ir-ethanol-liquid.csv', ...result, quality: processed.quality, processing: processed.parameters })));
     expect(response.body.candidates.length).toBeGreaterThan(0);
     expect(response.body.candidates[0]).toMatchObject({ id: 'ethanol', rank: 1 });
     expect(response.body.libraryVersion).toEqual(loadLibrary().version);
@@ -117,7 +117,7 @@ describe('Identification (e2e, MariaDB)', () => {
     expect(peaks.body.candidates[0].id).toBe('ethanol');
     expect(peaks.body.processing).toBeUndefined();
 
-    const spectrum = importSpectrum(new Uint8Array(irExample), { fileName: 'ir-example.csv', technique: 'ir' });
+    const spectrum = importSpectrum(new Uint8Array(irExample), { fileName: 'synthetic-ir-ethanol-liquid.csv', technique: 'ir' });
     const json = await t
       .http()
       .post('/api/identify')
@@ -129,10 +129,10 @@ describe('Identification (e2e, MariaDB)', () => {
   });
 
   it('validates technique, phase and options (400 naming the field)', async () => {
-    const wrong = await upload('inspector', irExample, 'ir-example.csv', { technique: 'uv', phase: 'plasma' }).expect(400);
+    const wrong = await upload('inspector', irExample, 'synthetic-ir-ethanol-liquid.csv', { technique: 'uv', phase: 'plasma' }).expect(400);
     expectErrorShape(wrong.body, 400, '/api/identify');
     expect(wrong.body.details.map((d: { field: string }) => d.field).sort()).toEqual(['phase', 'technique']);
-    const tolerance = await upload('inspector', irExample, 'ir-example.csv', { technique: 'ir', phase: 'condensed', toleranceCm1: '500' }).expect(400);
+    const tolerance = await upload('inspector', irExample, 'synthetic-ir-ethanol-liquid.csv', { technique: 'ir', phase: 'condensed', toleranceCm1: '500' }).expect(400);
     expect(tolerance.body.message).toContain('toleranceCm1 must be at most 50');
     const nothing = await t.http().post('/api/identify').set(as('inspector')).send({ technique: 'ir', phase: 'condensed' }).expect(400);
     expect(nothing.body.message).toContain('Send a file');
@@ -179,7 +179,7 @@ describe('Identification (e2e, MariaDB)', () => {
 
   it('uses the library in force: after a supervisor retires the best candidate, it is no longer ranked', async () => {
     await t.http().delete('/api/library/ethanol').set(as('supervisor')).expect(200);
-    const response = await upload('inspector', irExample, 'ir-example.csv').expect(200);
+    const response = await upload('inspector', irExample, 'synthetic-ir-ethanol-liquid.csv').expect(200);
     expect(response.body.candidates.map((c: { id: string }) => c.id)).not.toContain('ethanol');
     expect(response.body.libraryVersion.version).not.toBe(loadLibrary().version.version);
     const library = await t.http().get('/api/library').set(as('inspector')).expect(200);

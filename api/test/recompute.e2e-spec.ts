@@ -10,7 +10,7 @@ import { demo, pullAll, push, sha256, upsert, uploadWhole } from './support/fiel
 import { startS3Fake, type S3Fake } from './support/s3-fake';
 import { DEMO, signIn, startTestApp, type TestApp } from './support/test-app';
 
-const FIXTURE = 'ir-example.csv';
+const FIXTURE = 'synthetic-ir-ethanol-liquid.csv';
 const fixtureBytes = readFileSync(join(__dirname, '..', '..', 'fixtures', 'spectra', FIXTURE));
 
 /** The result a tablet stores for the fixture: the shared identification run on the device, in the sync form. */

@@ -80,7 +80,7 @@ export function identifyTests({ baseUrl, password }) {
       const { page } = browser;
       await choose(page, 'IR');
       await choose(page, 'Transmission');
-      await importScan(page, fixture('ir-example.csv'));
+      await importScan(page, fixture('synthetic-ir-ethanol-liquid.csv'));
       const plot = page.getByTestId('spectrum-plot').last();
       await plot.locator('canvas').first().waitFor();
       const first = page.getByTestId('candidate-ethanol').last();
@@ -169,7 +169,7 @@ export function identifyTests({ baseUrl, password }) {
       await page.getByTestId('connection-status').last().filter({ hasText: 'Offline' }).waitFor();
       await choose(page, 'IR');
       await choose(page, 'Transmission');
-      await importScan(page, fixture('ir-example.csv'));
+      await importScan(page, fixture('synthetic-ir-ethanol-liquid.csv'));
       await page.getByTestId('spectrum-plot').last().locator('canvas').first().waitFor();
       await page.getByTestId('candidate-ethanol').last().waitFor();
       await page.getByTestId('instrument-check-status').last().filter({ hasText: 'Instrument check in force' }).waitFor();
@@ -186,7 +186,7 @@ export function identifyTests({ baseUrl, password }) {
       await waitForPage(page, 'Capture');
       await choose(page, 'IR');
       await choose(page, 'Transmission');
-      await importScan(page, fixture('ir-example.csv'));
+      await importScan(page, fixture('synthetic-ir-ethanol-liquid.csv'));
       await page.getByTestId('spectrum-plot').last().locator('canvas').first().waitFor();
       await assertAccessible(page, 'the IR scan result, dark palette');
       await showAndShoot(page, page.getByTestId('spectrum-plot').last(), 'dark-inspector-ir-scan');

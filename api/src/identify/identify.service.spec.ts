@@ -8,7 +8,7 @@ import type { IdentifyRequestDto } from './dto/identify-request.dto';
 import { IdentifyService } from './identify.service';
 
 const FIXTURES = join(__dirname, '../../../fixtures/spectra');
-const irCsv = readFileSync(join(FIXTURES, 'ir-example.csv'));
+const irCsv = readFileSync(join(FIXTURES, 'synthetic-ir-ethanol-liquid.csv'));
 const ir = { technique: 'ir', phase: 'condensed' } as IdentifyRequestDto;
 
 /** The service against a fixed library in force (the real merge of the bundled library, no database). */
@@ -21,11 +21,11 @@ describe('IdentifyService', () => {
   const bundled = loadLibrary();
 
   it('answers a file with the command line’s object: the shared result, quality and processing', async () => {
-    const answer = await serviceWith(bundled).identifyFile({ originalname: 'ir-example.csv', buffer: irCsv }, ir);
-    const { processed, result } = identifySpectrum(importSpectrum(new Uint8Array(irCsv), { fileName: 'ir-example.csv', technique: 'ir' }), {
+    const answer = await serviceWith(bundled).identifyFile({ originalname: 'synthetic-ir-ethanol-liquid.csv', buffer: irCsv }, ir);
+    const { processed, result } = identifySpectrum(importSpectrum(new Uint8Array(irCsv), { fileName: 'synthetic-ir-ethanol-liquid.csv', technique: 'ir' }), {
       process: { technique: 'ir', phase: 'condensed' },
     });
-    expect(answer).toEqual(JSON.parse(JSON.stringify({ file: 'ir-example.csv', ...result, quality: processed.quality, processing: processed.parameters })));
+    expect(answer).toEqual(JSON.parse(JSON.stringify({ file: 'synthetic-ir-ethanol-liquid.csv', ...result, quality: processed.quality, processing: processed.parameters })));
     expect(answer.candidates[0]!.id).toBe('ethanol');
   });
 
@@ -34,17 +34,17 @@ describe('IdentifyService', () => {
     const { library } = mergeLibrary(bundled, [
       { compoundId: 'ethanol', version: 1, document: ethanol as unknown as Record<string, unknown>, retired: true, editedAt: new Date() },
     ]);
-    const answer = await serviceWith(library).identifyFile({ originalname: 'ir-example.csv', buffer: irCsv }, ir);
+    const answer = await serviceWith(library).identifyFile({ originalname: 'synthetic-ir-ethanol-liquid.csv', buffer: irCsv }, ir);
     expect(answer.candidates.map((c) => c.id)).not.toContain('ethanol');
     expect(answer.libraryVersion).toEqual(library.version);
     expect(answer.libraryVersion.version).not.toBe(bundled.version.version);
   });
 
   it('gives the same ranking for the same scan sent as a JSON spectrum with a descending axis', async () => {
-    const spectrum = importSpectrum(new Uint8Array(irCsv), { fileName: 'ir-example.csv', technique: 'ir' });
+    const spectrum = importSpectrum(new Uint8Array(irCsv), { fileName: 'synthetic-ir-ethanol-liquid.csv', technique: 'ir' });
     const service = serviceWith(bundled);
     const fromJson = await service.identifyJsonSpectrum({ xCm1: [...spectrum.xCm1].reverse(), y: [...spectrum.y].reverse(), ordinate: spectrum.ordinate }, ir);
-    const fromFile = await service.identifyFile({ originalname: 'ir-example.csv', buffer: irCsv }, ir);
+    const fromFile = await service.identifyFile({ originalname: 'synthetic-ir-ethanol-liquid.csv', buffer: irCsv }, ir);
     expect(fromJson.candidates.map((c) => [c.id, c.score])).toEqual(fromFile.candidates.map((c) => [c.id, c.score]));
   });
 

@@ -7,7 +7,7 @@ const ir = { ...DEFAULT_SCAN_SETTINGS, technique: 'ir' as const, atr: false };
 
 describe('handleRequest (the worker side of the protocol)', () => {
   it('answers an identify request with the plot, the quality and the ranked result under the same id', () => {
-    const response = handleRequest({ id: 7, kind: 'identify', file: fixtureScan('ir-example.csv'), scan: ir, processing: DEFAULT_PROCESSING });
+    const response = handleRequest({ id: 7, kind: 'identify', file: fixtureScan('synthetic-ir-ethanol-liquid.csv'), scan: ir, processing: DEFAULT_PROCESSING });
     expect(response.id).toBe(7);
     if (!response.ok || response.kind !== 'identify') throw new Error(`expected an identify answer, got ${JSON.stringify(response)}`);
     const { plot, processed, result } = response.outcome;
@@ -15,13 +15,13 @@ describe('handleRequest (the worker side of the protocol)', () => {
     expect(plot.xCm1.length).toBe(plot.y.length);
     expect(plot.peaksCm1.length).toBe(result.peaks.length);
     expect(processed.quality.reliable).toBe(true);
-    // The example scan's bands are ethanol's (fixtures/spectra/ir-example.csv).
+    // The example scan's bands are ethanol's (fixtures/spectra/synthetic-ir-ethanol-liquid.csv).
     expect(result.candidates[0]!.name).toBe('Ethanol');
     expect(result.candidates[0]!.explained.length).toBeGreaterThan(3);
   });
 
   it('applies the processing parameters it is given', () => {
-    const file = fixtureScan('ir-example.csv');
+    const file = fixtureScan('synthetic-ir-ethanol-liquid.csv');
     const strict = handleRequest({ id: 1, kind: 'identify', file, scan: ir, processing: { ...DEFAULT_PROCESSING, peakThresholdSigma: 40 } });
     const loose = handleRequest({ id: 2, kind: 'identify', file, scan: ir, processing: DEFAULT_PROCESSING });
     if (!strict.ok || strict.kind !== 'identify' || !loose.ok || loose.kind !== 'identify') throw new Error('both runs should succeed');
@@ -58,14 +58,14 @@ describe('handleRequest (the worker side of the protocol)', () => {
   });
 
   it('fails the instrument check on a scan that is not the standard', () => {
-    const response = handleRequest({ id: 6, kind: 'instrument-check', file: fixtureScan('ir-example.csv'), standardId: 'ir-polystyrene-ep-ft' });
+    const response = handleRequest({ id: 6, kind: 'instrument-check', file: fixtureScan('synthetic-ir-ethanol-liquid.csv'), standardId: 'ir-polystyrene-ep-ft' });
     if (!response.ok || response.kind !== 'instrument-check') throw new Error('expected a check');
     expect(response.check.pass).toBe(false);
     expect(response.check.reason).toMatch(/not found/);
   });
 
   it('refuses an unknown standard with a settings error', () => {
-    expect(handleRequest({ id: 8, kind: 'instrument-check', file: fixtureScan('ir-example.csv'), standardId: 'nope' })).toMatchObject({
+    expect(handleRequest({ id: 8, kind: 'instrument-check', file: fixtureScan('synthetic-ir-ethanol-liquid.csv'), standardId: 'nope' })).toMatchObject({
       ok: false,
       error: { code: 'settings' },
     });

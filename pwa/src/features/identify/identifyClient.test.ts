@@ -36,7 +36,7 @@ describe('createIdentifyClient', () => {
   it('matches each answer to its request even when answers arrive out of order', async () => {
     const worker = handlerPort();
     const client = createIdentifyClient(worker.port);
-    const scan = client.identify(fixtureScan('ir-example.csv'), { ...DEFAULT_SCAN_SETTINGS, atr: false }, DEFAULT_PROCESSING);
+    const scan = client.identify(fixtureScan('synthetic-ir-ethanol-liquid.csv'), { ...DEFAULT_SCAN_SETTINGS, atr: false }, DEFAULT_PROCESSING);
     const check = client.checkInstrument(fixtureScan('synthetic-ir-polystyrene-film.csv'), 'ir-polystyrene-ep-ft');
     worker.flush('reversed');
     expect((await scan).result.candidates[0]!.name).toBe('Ethanol');
@@ -56,7 +56,7 @@ describe('createIdentifyClient', () => {
     const worker = handlerPort();
     const client = createIdentifyClient(worker.port);
     const first = client.warmUp();
-    const second = client.checkInstrument(fixtureScan('ir-example.csv'), 'ir-polystyrene-ep-ft');
+    const second = client.checkInstrument(fixtureScan('synthetic-ir-ethanol-liquid.csv'), 'ir-polystyrene-ep-ft');
     worker.crash('out of memory');
     await expect(first).rejects.toMatchObject({ code: 'internal', message: 'out of memory' });
     await expect(second).rejects.toMatchObject({ code: 'internal' });

@@ -23,7 +23,7 @@ function check(file: string) {
 describe('instrument checks on the tablet', () => {
   it('keeps every check and reads the latest one of the technique, failed or passed', async () => {
     const passed = check('synthetic-ir-polystyrene-film.csv');
-    const failed = check('ir-example.csv');
+    const failed = check('synthetic-ir-ethanol-liquid.csv');
     expect(await latestInstrumentCheck(db.instrumentChecks, 'ir')).toBeUndefined();
     await saveInstrumentCheck(db.instrumentChecks, checkRow(passed, 'ir', 'film.csv', 1_000));
     await saveInstrumentCheck(db.instrumentChecks, checkRow(failed, 'ir', 'wrong.csv', 3_000));

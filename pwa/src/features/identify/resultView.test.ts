@@ -9,7 +9,7 @@ function identify(file: string, technique: 'ir' | 'raman', excitationNm?: number
   return identifySpectrum(spectrum, { process: { technique, phase: 'condensed' } }).result;
 }
 
-const ethanolScan = identify('ir-example.csv', 'ir');
+const ethanolScan = identify('synthetic-ir-ethanol-liquid.csv', 'ir');
 const nitrateScan = identify('synthetic-raman-ammonium-nitrate-785.csv', 'raman', 785);
 
 describe('resultView', () => {

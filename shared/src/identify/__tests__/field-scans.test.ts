@@ -119,7 +119,7 @@ describe('bands beside the CO2 region', () => {
 });
 
 describe('phase of the candidates', () => {
-  const example = importSpectrum(fixtureText('spectra/ir-example.csv'));
+  const example = importSpectrum(fixtureText('spectra/synthetic-ir-ethanol-liquid.csv'));
 
   it('the ethanol-like liquid example ranks ethanol first, scales gases down with the reason, and does not escalate', () => {
     const { result } = identifySpectrum(example, { process: { technique: 'ir', phase: 'condensed' } });
