@@ -6,7 +6,7 @@ import { deflateSync } from 'node:zlib';
 import { after, before, describe, it } from 'node:test';
 import { blockingViolations } from './axe.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
-import { openTab, signInTo, waitForPage, waitForServiceWorker } from './shell.mjs';
+import { openTab, signInTo, signOut, waitForPage, waitForServiceWorker } from './shell.mjs';
 
 const SITE = `Harbour shed 7 (e2e ${Date.now() % 100000})`;
 
@@ -186,6 +186,18 @@ export function captureTests({ baseUrl, password }) {
       await assertAccessible(page, 'the case page');
       await screenshot(page, 'capture-case-offline-800x1280');
 
+      // Signing out now would lose the records: it is refused with a reason.
+      await openTab(page, 'Account');
+      await page.getByRole('button', { name: 'Sign out' }).filter({ visible: true }).click();
+      await page.getByText('Some records have not reached the server yet').waitFor();
+      // The notice slides in: wait for its entry to finish before the picture.
+      await page.waitForFunction(() => getComputedStyle(document.querySelector('ion-toast').shadowRoot.querySelector('.toast-wrapper')).opacity === '1');
+      assert.match(page.url(), /\/tabs\/account$/);
+      await screenshot(page, 'capture-sign-out-refused-800x1280');
+      await page.locator('ion-toast').getByRole('button', { name: 'Close' }).click();
+      await page.goto(`${baseUrl}/tabs/cases/${caseId}`);
+      await waitForPage(page, SITE);
+
       const local = await page.evaluate(readCapture);
       assert.equal(local.outbox.length, 7, 'one change each: case, sample, two photos, hand-over and two site notes');
     });
@@ -289,6 +301,11 @@ export function captureTests({ baseUrl, password }) {
       await openTab(page, 'Cases');
       await page.getByTestId(`case-${caseId}`).filter({ hasText: 'On server' }).waitFor();
       await screenshot(page, 'capture-cases-synced-800x1280');
+
+      // With everything on the server, signing out is allowed and leaves no field records on the tablet.
+      await signOut(page);
+      const left = await page.evaluate(readCapture);
+      assert.deepEqual([left.cases.length, left.samples.length, left.photos.length, left.outbox.length], [0, 0, 0, 0]);
       assert.deepEqual(browser.pageErrors, []);
     });
   });

@@ -4,7 +4,8 @@ import { useApiClient } from '../api/ApiClientContext';
 import { ApiError } from '../api/apiError';
 import { captureDb } from '../cases/captureDb';
 import { useOnlineStatus } from '../network/onlineStatus';
-import { clearCaptureDataIfSynced } from '../sync/clearCaptureData';
+import { clearCaptureDataIfSynced, UnsyncedWorkError } from '../sync/clearCaptureData';
+import { notifySignOutBlocked } from '../sync/signOutBlocked';
 import { login, logout, meQuery } from './authApi';
 import { offlineSessionEndsAt, sessionStatus, type SessionStatus } from './offlineGrace';
 import type { SessionStore } from './sessionStore';
@@ -59,8 +60,14 @@ export function SessionProvider({ store, offlineSessionHours, children }: { stor
   );
 
   const signOut = useCallback(async () => {
-    // Refuses (throws) while field records wait for the server: signing out would lose them.
-    await clearCaptureDataIfSynced(captureDb());
+    // Refused while field records wait for the server: signing out would lose them.
+    try {
+      await clearCaptureDataIfSynced(captureDb());
+    } catch (error) {
+      if (!(error instanceof UnsyncedWorkError)) throw error;
+      notifySignOutBlocked();
+      return;
+    }
     try {
       if (store.current() && navigator.onLine) await logout(client);
     } catch (error) {

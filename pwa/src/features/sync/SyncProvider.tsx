@@ -1,4 +1,5 @@
 import { createContext, useContext, useEffect, useMemo, useRef, useSyncExternalStore, type ReactNode } from 'react';
+import { SignOutBlockedNotice } from '../../components/cases/SignOutBlockedNotice';
 import { useApiClient } from '../api/ApiClientContext';
 import { captureDb } from '../cases/captureDb';
 import { useSession } from '../session/SessionProvider';
@@ -41,7 +42,12 @@ export function SyncProvider({ children }: { children: ReactNode }) {
     };
   }, [engine, enabled]);
 
-  return <SyncContext.Provider value={engine}>{children}</SyncContext.Provider>;
+  return (
+    <SyncContext.Provider value={engine}>
+      {children}
+      <SignOutBlockedNotice />
+    </SyncContext.Provider>
+  );
 }
 
 /** The sync status and the "sync now" action of the nearest SyncProvider. */

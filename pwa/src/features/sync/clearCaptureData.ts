@@ -2,9 +2,8 @@ import type { SitebandDb } from '../../db/db';
 import { captureScope } from './captureTables';
 import { everythingSynced } from './syncState';
 
-/** Refusal to sign out while records wait for the server; the message is the screen's text key. */
+/** Refusal to sign out while records wait for the server. */
 export class UnsyncedWorkError extends Error {
-  readonly messageKey = 'capture.signOutBlocked';
   constructor() {
     super('Some field records have not reached the server yet: sync before signing out');
     this.name = 'UnsyncedWorkError';
