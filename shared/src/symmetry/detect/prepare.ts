@@ -1,8 +1,8 @@
 /** Centre of mass, principal axes and sets of possibly equivalent atoms: the input to the element search. */
-import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
 import type { Atom, Structure, Vec3 } from '../types.js';
 import { atomMass } from '../../chem/isotopes.js';
 import { atomKind } from '../atom-matcher.js';
+import { inertiaEigen } from '../inertia.js';
 
 /** A structure moved to its centre of mass, with what the search needs to know about it. */
 export interface PreparedStructure {
@@ -33,19 +33,8 @@ export function prepareStructure(structure: Structure, tolerance: number): Prepa
   const positions = atoms.map((a): Vec3 => [a.position[0] - centre[0], a.position[1] - centre[1], a.position[2] - centre[2]]);
   const kinds = atoms.map(atomKind);
 
-  const t = Matrix.zeros(3, 3);
-  positions.forEach((r, i) => {
-    const r2 = r[0] ** 2 + r[1] ** 2 + r[2] ** 2;
-    for (let p = 0; p < 3; p++) for (let q = 0; q < 3; q++) t.set(p, q, t.get(p, q) + masses[i] * ((p === q ? r2 : 0) - r[p] * r[q]));
-  });
-  const eig = new EigenvalueDecomposition(t, { assumeSymmetric: true });
-  // ml-matrix's getters copy on every access: read them once.
-  const values = eig.realEigenvalues;
-  const vectors = eig.eigenvectorMatrix;
-  const order = [0, 1, 2].sort((p, q) => values[p] - values[q]);
-  const column = (c: number): Vec3 => [vectors.get(0, c), vectors.get(1, c), vectors.get(2, c)];
-  const moments = order.map((c) => Math.max(0, values[c])) as unknown as [number, number, number];
-  const axes = order.map(column) as unknown as [Vec3, Vec3, Vec3];
+  const { values, axes } = inertiaEigen(positions, masses);
+  const moments = values.map((v) => Math.max(0, v)) as unknown as [number, number, number];
 
   return { atoms, positions, masses, kinds, centre, moments, axes, classes: equivalenceClasses(positions, kinds, tolerance) };
 }
