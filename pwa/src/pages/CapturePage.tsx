@@ -13,6 +13,7 @@ import { identifyClient } from '../features/identify/identifyWorker';
 import type { IdentifyOutcome } from '../features/identify/protocol';
 import { DEFAULT_SCAN_SETTINGS, type ScanSettings } from '../features/identify/scanSettings';
 import { useScanIdentification } from '../features/identify/useScanIdentification';
+import { useLibrary } from '../features/library/useLibrary';
 
 /**
  * The inspector's scan screen: how the scan was taken, the instrument's file, then the likely
@@ -21,7 +22,9 @@ import { useScanIdentification } from '../features/identify/useScanIdentificatio
 export default function CapturePage() {
   const { t } = useTranslation();
   const [scan, setScan] = useState<ScanSettings>(DEFAULT_SCAN_SETTINGS);
-  const { state, processing, setProcessing, chooseFile } = useScanIdentification(identifyClient, scan);
+  const library = useLibrary().data;
+  // Rank against the library in force (supervisors' edits) once the tablet has received it.
+  const { state, processing, setProcessing, chooseFile } = useScanIdentification(identifyClient, scan, library?.source === 'bundled' ? undefined : library?.library);
   const [acknowledgedFor, setAcknowledgedFor] = useState<IdentifyResult | null>(null);
   // Start the worker as the screen opens, so the library indices are built before the first file.
   useEffect(() => {

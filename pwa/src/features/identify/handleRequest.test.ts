@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { loadLibrary, type Library } from '@siteband/shared';
 import { handleRequest } from './handleRequest';
 import { DEFAULT_PROCESSING, DEFAULT_SCAN_SETTINGS } from './scanSettings';
 import { fixtureScan, textScan } from './testFixtures';
@@ -69,5 +70,21 @@ describe('handleRequest (the worker side of the protocol)', () => {
       ok: false,
       error: { code: 'settings' },
     });
+  });
+
+  it('ranks against the library in force it is sent: a compound retired there is no longer a candidate', () => {
+    const bundled = loadLibrary();
+    const file = fixtureScan('synthetic-ir-ethanol-liquid.csv');
+    const withoutEthanol: Library = {
+      ...bundled,
+      version: { ...bundled.version, version: `${bundled.version.version}+edits.test`, contentHash: 'test-without-ethanol' },
+      compounds: bundled.compounds.filter((c) => c.id !== 'ethanol'),
+    };
+    const inForce = handleRequest({ id: 9, kind: 'identify', file, scan: ir, processing: DEFAULT_PROCESSING, library: withoutEthanol });
+    const plain = handleRequest({ id: 10, kind: 'identify', file, scan: ir, processing: DEFAULT_PROCESSING });
+    if (!inForce.ok || inForce.kind !== 'identify' || !plain.ok || plain.kind !== 'identify') throw new Error('both runs should succeed');
+    expect(plain.outcome.result.candidates[0]!.id).toBe('ethanol');
+    expect(inForce.outcome.result.candidates.map((c) => c.id)).not.toContain('ethanol');
+    expect(inForce.outcome.result.libraryVersion.contentHash).toBe('test-without-ethanol');
   });
 });

@@ -10,6 +10,7 @@ import {
   SpectrumImportError,
   warmUpIdentification,
   type FlaggedPeak,
+  type Library,
   type Peak,
   type Spectrum,
 } from '@siteband/shared';
@@ -32,6 +33,18 @@ export function toWorkerError(error: unknown): WorkerError {
   return { code: 'internal', message: error instanceof Error ? error.message : String(error) };
 }
 
+let kept: Library | undefined;
+
+/**
+ * The library a request ranks against. The same content arrives as a fresh copy with every message,
+ * so it is kept by content hash: the ranking's indices are built once per library version.
+ */
+function libraryFor(sent: Library | undefined): Library | undefined {
+  if (sent === undefined) return undefined;
+  if (kept?.version.contentHash !== sent.version.contentHash) kept = sent;
+  return kept;
+}
+
 /** Runs one request and answers it; never throws, so every request gets its answer. */
 export function handleRequest(request: WorkerRequest): WorkerResponse {
   try {
@@ -47,7 +60,8 @@ export function handleRequest(request: WorkerRequest): WorkerResponse {
           technique: scan.technique,
           ...(scan.technique === 'raman' ? { excitationNm: scan.excitationNm } : {}),
         });
-        const { processed, result } = identifySpectrum(spectrum, { process: toProcessOptions(scan, processing) });
+        const library = libraryFor(request.library);
+        const { processed, result } = identifySpectrum(spectrum, { process: toProcessOptions(scan, processing), ...(library ? { library } : {}) });
         return {
           id: request.id,
           ok: true,

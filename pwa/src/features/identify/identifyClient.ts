@@ -1,5 +1,5 @@
 /** The screens' side of the worker protocol: one promise per request, matched by id. */
-import type { InstrumentCheckResult } from '@siteband/shared';
+import type { InstrumentCheckResult, Library } from '@siteband/shared';
 import type { IdentifyOutcome, PlotData, ScanFile, WorkerError, WorkerRequest, WorkerResponse } from './protocol';
 import type { ProcessingSettings, ScanSettings } from './scanSettings';
 
@@ -23,7 +23,7 @@ export class IdentifyError extends Error {
 /** Sends requests to the identification worker. */
 export interface IdentifyClient {
   warmUp(): Promise<void>;
-  identify(file: ScanFile, scan: ScanSettings, processing: ProcessingSettings): Promise<IdentifyOutcome>;
+  identify(file: ScanFile, scan: ScanSettings, processing: ProcessingSettings, library?: Library): Promise<IdentifyOutcome>;
   checkInstrument(file: ScanFile, standardId: string, excitationNm?: number): Promise<{ check: InstrumentCheckResult; plot: PlotData }>;
 }
 
@@ -63,8 +63,8 @@ export function createIdentifyClient(port: WorkerPort): IdentifyClient {
     async warmUp() {
       await send({ kind: 'warm-up' });
     },
-    async identify(file, scan, processing) {
-      const response = await send({ kind: 'identify', file, scan, processing });
+    async identify(file, scan, processing, library) {
+      const response = await send({ kind: 'identify', file, scan, processing, ...(library ? { library } : {}) });
       if (response.kind !== 'identify') throw new IdentifyError({ code: 'internal', message: `unexpected answer ${response.kind}` });
       return response.outcome;
     },

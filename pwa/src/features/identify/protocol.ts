@@ -3,7 +3,7 @@
  * worker answers each with the same id, either with its result or with a readable error, so the
  * caller never waits on a request that failed.
  */
-import type { IdentifyResult, InstrumentCheckResult, ProcessedScan } from '@siteband/shared';
+import type { IdentifyResult, InstrumentCheckResult, Library, ProcessedScan } from '@siteband/shared';
 import type { ProcessingSettings, ScanSettings } from './scanSettings';
 
 /** The instrument's exported file as read from the picker. */
@@ -25,6 +25,8 @@ export interface IdentifyRequest {
   readonly file: ScanFile;
   readonly scan: ScanSettings;
   readonly processing: ProcessingSettings;
+  /** The library in force as the tablet last received it; absent: the bundled library. */
+  readonly library?: Library;
 }
 
 /** Import a scan of a reference standard and check it. */
