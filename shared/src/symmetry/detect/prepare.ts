@@ -44,7 +44,9 @@ function equivalenceClasses(positions: readonly Vec3[], kinds: readonly string[]
   const byKind = new Map<string, number[]>();
   radius.forEach((r, i) => {
     if (r < tolerance) return; // an atom at the centre is fixed by every operation
-    byKind.set(kinds[i], [...(byKind.get(kinds[i]) ?? []), i]);
+    const members = byKind.get(kinds[i]);
+    if (members) members.push(i);
+    else byKind.set(kinds[i], [i]);
   });
   const classes: number[][] = [];
   for (const members of byKind.values()) {
