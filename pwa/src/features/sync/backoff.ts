@@ -9,8 +9,8 @@ export interface BackoffOptions {
 }
 
 /**
- * Delay before retry number `failures` (1 = first failure): exponential with "full jitter"
- * (common practice), so many tablets coming back online at once do not retry in step.
+ * Delay before retry number `failures` (1 = first failure): exponential with "equal jitter"
+ * (half fixed, half random; common practice), so tablets coming back online together do not retry in step.
  */
 export function backoffDelayMs(failures: number, { baseMs = 2_000, maxMs = 300_000, random = Math.random }: BackoffOptions = {}): number {
   if (!Number.isInteger(failures) || failures < 1) throw new RangeError(`failures must be a positive integer, got ${failures}`);
