@@ -1,6 +1,6 @@
 import { useDeferredValue, useState } from 'react';
 import { IonIcon, IonItem, IonLabel, IonList } from '@ionic/react';
-import { shapesOutline } from 'ionicons/icons';
+import { addCircleOutline, shapesOutline } from 'ionicons/icons';
 import { useLocation } from 'react-router-dom';
 import { useTranslation } from 'react-i18next';
 import { PageShell } from '../components/PageShell';
@@ -9,16 +9,19 @@ import { LibraryFilters } from '../components/library/LibraryFilters';
 import { LibraryVersionNote } from '../components/library/LibraryVersionNote';
 import '../components/library/library.css';
 import '../components/structure/structure.css';
+import { canCurateLibrary } from '../features/library/canCurate';
 import { libraryPaths } from '../features/library/libraryPaths';
 import { searchCompounds, type CompoundFilter } from '../features/library/searchCompounds';
 import { useLibrary } from '../features/library/useLibrary';
+import { useSession } from '../features/session/SessionProvider';
 import { formatNumber } from '../features/structure/formatNumber';
 
-/** The compound library: search and filter the reference compounds; the structure check sits beside it. */
+/** The compound library: search and filter the reference compounds; the structure check (and, for supervisors, a new compound) sits beside it. */
 export default function LibraryPage() {
   const { t, i18n } = useTranslation();
   const paths = libraryPaths(useLocation().pathname);
   const library = useLibrary();
+  const { session } = useSession();
   const [filter, setFilter] = useState<CompoundFilter>({});
   // Typing stays responsive on a slow tablet while the list catches up.
   const deferred = useDeferredValue(filter);
@@ -34,6 +37,15 @@ export default function LibraryPage() {
             <p>{t('pages.library.structureLinkHint')}</p>
           </IonLabel>
         </IonItem>
+        {canCurateLibrary(session?.user.role) && (
+          <IonItem routerLink={paths.add} detail button className="sb-link-item" data-testid="add-compound">
+            <IonIcon icon={addCircleOutline} slot="start" aria-hidden="true" />
+            <IonLabel>
+              <h2>{t('library.list.add')}</h2>
+              <p>{t('library.list.addHint')}</p>
+            </IonLabel>
+          </IonItem>
+        )}
       </IonList>
       <section className="sb-panel" aria-labelledby="compounds-heading">
         <h2 id="compounds-heading" className="sb-panel__heading">

@@ -6,6 +6,8 @@ interface ApiErrorBody {
   statusCode?: number;
   error?: string;
   message?: string | string[];
+  /** Per-field reasons, e.g. every reason a library entry was refused. */
+  details?: { field?: string; messages?: unknown[] }[];
   requestId?: string;
 }
 
@@ -43,9 +45,12 @@ export class ApiError extends Error {
     if (!body || typeof body !== 'object') {
       return new ApiError('http', response.status, `The server answered ${response.status} ${response.statusText}`.trim());
     }
-    const { error, message, requestId } = body as ApiErrorBody;
-    const details = Array.isArray(message) ? message.map(String) : message ? [String(message)] : [];
-    const text = details.join('; ') || error || `The server answered ${response.status}`;
+    const { error, message, requestId, details: fields } = body as ApiErrorBody;
+    // Per-field reasons are the precise list; the message then only joins them.
+    const reasons = Array.isArray(fields) ? fields.flatMap((f) => (Array.isArray(f?.messages) ? f.messages.map(String) : [])) : [];
+    const lines = Array.isArray(message) ? message.map(String) : message ? [String(message)] : [];
+    const details = reasons.length > 0 ? reasons : lines;
+    const text = lines.join('; ') || error || `The server answered ${response.status}`;
     return new ApiError('http', response.status, text, { error, details: details.length ? details : [text], requestId });
   }
 }
