@@ -166,7 +166,8 @@ describe('administering users', { concurrency: false }, () => {
     await page.getByRole('table');
 
     await page.getByLabel('Full name').fill(name);
-    await page.getByLabel('Email', { exact: true }).fill(email);
+    // By role: the sign-in page may still be in the DOM, hidden, with its own Email field.
+    await page.getByRole('textbox', { name: 'Email', exact: true }).fill(email);
     await page.getByLabel('Role', { exact: true }).selectOption('inspector');
     await page.getByLabel('First password').fill(`${PASSWORD}-e2e`);
     await page.getByRole('button', { name: 'Create user' }).click();
