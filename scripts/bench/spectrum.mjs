@@ -2,6 +2,7 @@
 // median times of import, preprocessing (baseline and smoothing inside processScan) and peak
 // picking over repeated runs. Plain Node ESM against the built shared package:
 //   npm run build -w shared && node scripts/bench/spectrum.mjs [runs]
+import os from 'node:os';
 import { pathToFileURL } from 'node:url';
 import {
   estimateBaseline,
@@ -62,7 +63,7 @@ function time(runs, task) {
 }
 
 /** Time each stage on a 4,096-point IR and Raman scan; returns rows of { technique, stage, medianMs }. */
-export function runSpectrumBench(runs = 50) {
+export function measureSpectrumBench(runs = 50) {
   const rows = [];
   for (const technique of ['ir', 'raman']) {
     const scan = syntheticScan(technique);
@@ -87,9 +88,11 @@ export function runSpectrumBench(runs = 50) {
   return rows;
 }
 
-if (import.meta.url === pathToFileURL(process.argv[1]).href) {
-  const runs = Number(process.argv[2] ?? 50);
-  const rows = runSpectrumBench(runs);
-  console.log(`Spectrum pipeline, ${POINTS}-point synthetic scans, median of ${runs} runs (Node ${process.version})`);
+/** Measure and print the stage table (what `npm run bench` shows). */
+export function runSpectrumBench(runs = 50) {
+  const rows = measureSpectrumBench(runs);
+  console.log(`Spectrum pipeline, ${POINTS}-point synthetic scans, median of ${runs} runs (Node ${process.version}, load ${os.loadavg().map((l) => l.toFixed(2)).join(', ')})`);
   console.table(rows.map((r) => ({ technique: r.technique, stage: r.stage, 'median ms': Number(r.medianMs.toFixed(2)) })));
 }
+
+if (import.meta.url === pathToFileURL(process.argv[1]).href) runSpectrumBench(Number(process.argv[2] ?? 50));
