@@ -11,6 +11,24 @@ const AMMONIA = ['4', 'ammonia', 'N 0 0 0.1', 'H 0.94 0 -0.27', 'H -0.47 0.814 -
 // The same file with a coordinate that is not a number on line 5.
 const BROKEN = AMMONIA.replace('H -0.47 0.814 -0.27', 'H -0.47 north -0.27');
 
+/** A CAS RN no library compound carries, with its check digit worked out by CAS's published rule (from memory). */
+function unusedCas() {
+  const body = String(1_000_000 + (Date.now() % 8_000_000));
+  const digits = body.slice(0, 5) + body.slice(5, 7);
+  let sum = 0;
+  for (let i = 0; i < digits.length; i++) sum += Number(digits[digits.length - 1 - i]) * (i + 1);
+  return `${body.slice(0, 5)}-${body.slice(5, 7)}-${sum % 10}`;
+}
+
+/** Picks a source from the library's list in the source field with the given test id, and how it is known. */
+async function chooseSource(scope, testId, citation, basis) {
+  const field = scope.getByTestId(testId).last();
+  await field.getByLabel('Source', { exact: true }).selectOption({ label: citation });
+  await field.getByLabel('How the value is known').selectOption({ label: basis });
+}
+
+const DEMO_SOURCE = 'Invented demo data (not measured)';
+
 async function assertAccessible(page, where) {
   assert.deepEqual(await blockingViolations(page), [], `axe found serious or critical problems on ${where}`);
 }
@@ -131,6 +149,10 @@ export function libraryTests({ baseUrl: BASE_URL, password: PASSWORD }) {
       const before = await box.inputValue();
       await box.fill(`${before}\n${synonym}`);
       await page.getByTestId('labels-match').last().waitFor({ timeout: 20_000 });
+      // Cl2 is D∞h: its one fundamental (Σg+) is Raman-active only, so no IR intensity can be given.
+      assert.match(await page.getByTestId('inactive-ν1-ir').last().textContent(), /^IR-inactive in D/);
+      assert.equal(await page.getByLabel('IR intensity of ν1').last().isDisabled(), true);
+      assert.equal(await page.getByLabel('Raman intensity of ν1').last().isDisabled(), false);
       await assertAccessible(page, 'the compound editor');
       await screenshot(page, 'supervisor-compound-editor');
       await page.getByRole('button', { name: 'Save compound' }).last().click();
@@ -188,6 +210,100 @@ export function libraryTests({ baseUrl: BASE_URL, password: PASSWORD }) {
       await waitForPage(page, 'Compound library');
       await page.getByLabel('Search by name, synonym, CAS RN or formula').last().fill('Trial halogen');
       await page.getByText('No compound matches').last().waitFor();
+      await signOut(page);
+    });
+
+    it('adds a compound from the blank form: two IR bands, a GHS class, sources from the list; a refusal lists its reasons', async () => {
+      const { page } = browser;
+      await signInTo(page, BASE_URL, 'supervisor@demo.test', PASSWORD, 'Review queue');
+      await openTab(page, 'Compound library');
+      await page.getByTestId('add-compound').last().click();
+      await waitForPage(page, 'New compound');
+      const name = `Demo degreaser ${Date.now() % 100000}`;
+      const id = name.toLowerCase().replace(/ /g, '-');
+      await page.getByLabel('Name', { exact: true }).last().fill(name);
+      assert.equal(await page.getByLabel('Id (lower-case letters, digits and hyphens)').last().inputValue(), id, 'the id follows the name');
+      await page.getByLabel('Formula', { exact: true }).last().fill('C4H8O2');
+      await page.getByLabel('Family').last().selectOption({ label: 'Solvent or fuel' });
+
+      // The CAS RN is checked as it is typed.
+      const cas = page.getByLabel('CAS RN', { exact: true }).last();
+      await cas.fill('7782-50-4');
+      await page.getByTestId('cas-status').last().filter({ hasText: 'check digit does not match' }).waitFor();
+      // Chlorine's CAS RN passes on the tablet; the server refuses a second compound with it.
+      await cas.fill('7782-50-5');
+      await page.getByTestId('cas-status').last().filter({ hasText: 'Check digit correct' }).waitFor();
+      await chooseSource(page, 'cas-source', DEMO_SOURCE, 'invented (demo only)');
+
+      await chooseSource(page, 'bands-source', DEMO_SOURCE, 'invented (demo only)');
+      for (const [i, [cm1, intensity, assignment]] of [['1740', 'very strong', 'C=O stretch'], ['1240', 'strong', 'C–O stretch']].entries()) {
+        await page.getByRole('button', { name: 'Add a band' }).last().click();
+        const band = page.getByTestId(`band-${i}`).last();
+        await band.getByLabel('Wavenumber, cm⁻¹').fill(cm1);
+        await band.getByLabel('Relative intensity').selectOption({ label: intensity });
+        await band.getByLabel('Assignment', { exact: true }).fill(assignment);
+      }
+
+      await page.getByRole('button', { name: 'Add a GHS classification' }).last().click();
+      await page.getByLabel('Hazard class 1').last().selectOption({ label: 'Flammable liquid' });
+      await page.getByLabel('Category of class 1').last().fill('2');
+      await page.getByRole('button', { name: 'Add an H-statement' }).last().click();
+      await page.getByLabel('H-statement 1').last().selectOption('H225');
+      await page.getByLabel(/^GHS02 /).last().check();
+      await page.getByLabel('Signal word').last().selectOption('Danger');
+      await page.getByLabel('UN number').last().fill('1993');
+      await chooseSource(page, 'hazard-source', DEMO_SOURCE, 'invented (demo only)');
+
+      const preview = page.getByTestId('caution-preview').last();
+      await preview.filter({ hasText: 'H225' }).waitFor();
+      assert.equal(await preview.locator('.sb-pictogram').count(), 1, 'the preview shows the one pictogram chosen');
+      assert.match(await preview.textContent(), /Danger/);
+      await page.getByTestId('entry-error').last().waitFor({ state: 'detached' });
+      await assertAccessible(page, 'the blank compound form, filled');
+      await page.getByLabel('Name', { exact: true }).last().scrollIntoViewIfNeeded();
+      await screenshot(page, 'supervisor-new-compound-form');
+      await page.getByTestId('band-1').last().scrollIntoViewIfNeeded();
+      await screenshot(page, 'supervisor-new-compound-bands');
+      await preview.scrollIntoViewIfNeeded();
+      await screenshot(page, 'supervisor-new-compound-preview');
+
+      await page.getByRole('button', { name: 'Save compound' }).last().click();
+      const refusal = page.getByTestId('server-error').last();
+      await refusal.waitFor();
+      const reasons = await refusal.getByTestId('server-reason').allTextContents();
+      assert.equal(reasons.length, 1);
+      assert.match(reasons[0], /CAS RN 7782-50-5 is also/);
+      assert.doesNotMatch(reasons[0], /^The compound was not saved/, 'the reason itself, not the joined message');
+      await assertAccessible(page, 'the blank compound form with the server reasons');
+      await screenshot(page, 'supervisor-new-compound-refused');
+
+      await cas.fill(unusedCas());
+      await refusal.waitFor({ state: 'detached' });
+      await page.getByRole('button', { name: 'Save compound' }).last().click();
+      await waitForPage(page, name);
+      const card = page.getByTestId('compound-caution-card').last();
+      assert.match(await card.textContent(), /H225/);
+      assert.ok(await card.locator('.sb-pictogram').filter({ hasText: 'GHS02' }).isVisible());
+      const positions = await page.getByTestId('bands-table').last().locator('tbody tr td:nth-child(2)').allTextContents();
+      assert.deepEqual(positions, ['1,740', '1,240']);
+      await screenshot(page, 'supervisor-new-compound-detail');
+
+      await page.goto(`${BASE_URL}/tabs/library`);
+      await waitForPage(page, 'Compound library');
+      await page.getByLabel('Search by name, synonym, CAS RN or formula').last().fill(name);
+      await page.getByTestId(`compound-${id}`).last().waitFor();
+
+      // A band's wavenumber changed in the editor is saved.
+      await page.getByTestId(`compound-${id}`).last().click();
+      await waitForPage(page, name);
+      await page.getByTestId('edit-compound').last().click();
+      await waitForPage(page, `Edit ${name}`);
+      await page.getByTestId('band-0').last().getByLabel('Wavenumber, cm⁻¹').fill('1735.5');
+      await assertAccessible(page, 'the compound editor of a band compound');
+      await screenshot(page, 'supervisor-compound-editor-bands');
+      await page.getByRole('button', { name: 'Save compound' }).last().click();
+      await waitForPage(page, name);
+      await page.getByTestId('bands-table').last().locator('tbody tr').first().filter({ hasText: '1,735.5' }).waitFor();
       await signOut(page);
     });
 
