@@ -1,6 +1,6 @@
 /** The compound library: types, validation, the bundled data and its link to the symmetry engine. */
 export * from './types.js';
-export { isValidCas } from './cas.js';
+export { CAS_PATTERN, isValidCas } from './cas.js';
 export { BAND_RANGE_CM1, validateCompound } from './validate-compound.js';
 export { validateLibrary, type Library } from './validate-library.js';
 export { loadLibrary } from './load.js';
