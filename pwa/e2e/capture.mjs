@@ -2,12 +2,16 @@
 // Registered in run.mjs. The site, sample and people below are an invented demo scenario.
 import assert from 'node:assert/strict';
 import { createHash } from 'node:crypto';
+import { readFileSync } from 'node:fs';
+import { dirname, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { deflateSync } from 'node:zlib';
 import { after, before, describe, it } from 'node:test';
 import { blockingViolations } from './axe.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
 import { openTab, signInTo, signOut, waitForPage, waitForServiceWorker } from './shell.mjs';
 
+const SPECTRA = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'fixtures', 'spectra');
 const SITE = `Harbour shed 7 (e2e ${Date.now() % 100000})`;
 
 async function assertAccessible(page, where) {
@@ -53,7 +57,7 @@ function readCapture() {
     const open = indexedDB.open('siteband');
     open.onerror = () => reject(open.error);
     open.onsuccess = () => {
-      const names = ['cases', 'samples', 'handovers', 'notes', 'photos', 'outbox'];
+      const names = ['cases', 'samples', 'handovers', 'notes', 'photos', 'scans', 'escalations', 'outbox'];
       const tx = open.result.transaction(names);
       const out = {};
       for (const name of names) {
@@ -257,6 +261,94 @@ export function captureTests({ baseUrl, password }) {
       assert.equal(detail.samples.length, 1);
       assert.equal(detail.handovers.length, 1);
       assert.equal(detail.attachments.length, 2);
+    });
+
+    it('saves an acknowledged Raman scan to the sample offline with its raw file and escalation, and syncs them', async () => {
+      const { page, context } = browser;
+      const sample = (await page.evaluate(readCapture)).samples.find((s) => s.caseId === caseId);
+      await page.goto(`${baseUrl}/tabs/cases/${caseId}/samples/${sample.id}`);
+      await waitForPage(page, 'Sample HS7-01');
+      // Opened online, the scan screen receives the library in force (edited by supervisors in
+      // the library suite), which the server's recomputation uses too.
+      const library = page.waitForResponse((r) => new URL(r.url()).pathname === '/api/library' && r.ok());
+      await page.getByTestId('add-scan').filter({ visible: true }).click();
+      await waitForPage(page, 'New scan of HS7-01');
+      await library;
+      await context.setOffline(true);
+      await page.getByTestId('connection-status').filter({ visible: true }).filter({ hasText: 'Offline' }).waitFor();
+      await page.getByLabel('Raman', { exact: true }).check();
+      await page.getByLabel('785 nm', { exact: true }).check();
+      const name = 'synthetic-raman-ammonium-nitrate-785.csv';
+      const raw = readFileSync(join(SPECTRA, name));
+      await page.getByTestId('scan-file').last().setInputFiles({ name, mimeType: 'text/csv', buffer: raw });
+      await page.getByTestId('candidate-ammonium-nitrate').last().waitFor({ timeout: 30_000 });
+      assert.equal(await page.getByTestId('save-scan').count(), 0, 'nothing to save before the caution card is acknowledged');
+      await page.getByLabel(/I have read the caution cards/).check();
+      await page.getByRole('button', { name: 'Acknowledge and mark reviewed by inspector' }).last().click();
+      const save = page.getByTestId('save-scan').last();
+      await save.waitFor();
+      await assertAccessible(page, 'the sample scan screen, acknowledged');
+      await save.scrollIntoViewIfNeeded();
+      await screenshot(page, 'capture-sample-scan-acknowledged-800x1280');
+      await save.click();
+      await waitForPage(page, 'Scan of HS7-01');
+      const scanUrl = page.url();
+      await page.getByTestId('scan-escalation').filter({ visible: true }).waitFor();
+      assert.equal((await page.getByTestId('scan-sha256').filter({ visible: true }).textContent()).trim(), createHash('sha256').update(raw).digest('hex'));
+      await assertAccessible(page, 'the saved scan offline');
+
+      await page.reload();
+      await waitForPage(page, 'Scan of HS7-01');
+      assert.match(await page.getByTestId('stored-candidates').filter({ visible: true }).textContent(), /Ammonium nitrate/);
+      assert.equal((await page.getByTestId('scan-sync').filter({ visible: true }).textContent()).trim(), 'Local only');
+      const local = await page.evaluate(readCapture);
+      const scan = local.scans.find((s) => s.data.sampleId === sample.id);
+      assert.ok(scan.data.inspectorAcknowledgedAt, 'the scan is saved as reviewed by the inspector');
+      assert.equal(local.escalations.filter((e) => e.data.scanId === scan.id).length, 1);
+      await page.goto(`${baseUrl}/tabs/cases/${caseId}/samples/${sample.id}`);
+      await waitForPage(page, 'Sample HS7-01');
+      const listed = page.getByTestId('sample-scan').filter({ visible: true });
+      assert.match(await listed.textContent(), /Raman.*Ammonium nitrate.*Caution card acknowledged.*Local only/s);
+      await assertAccessible(page, 'the sample page with a scan');
+      await listed.scrollIntoViewIfNeeded();
+      await screenshot(page, 'capture-sample-scans-offline-800x1280');
+
+      await context.setOffline(false);
+      await page.getByTestId('connection-status').filter({ visible: true }).filter({ hasText: 'Online' }).waitFor();
+      await page.goto(`${baseUrl}/tabs/cases/${caseId}`);
+      await waitForPage(page, SITE);
+      await page.getByTestId('sync-now').filter({ visible: true }).click();
+      await waitForSynced(page);
+
+      let detail;
+      for (let attempt = 0; attempt < 150; attempt += 1) {
+        detail = await (await api(`/api/cases/${caseId}`, token)).json();
+        if (detail.scans[0]?.serverRecomputedAt || detail.scans[0]?.serverRecomputeError) break;
+        await page.waitForTimeout(200);
+      }
+      assert.equal(detail.scans.length, 1);
+      const onServer = detail.scans[0];
+      assert.equal(onServer.id, scan.id);
+      assert.equal(onServer.serverRecomputeError, null);
+      assert.equal(onServer.resultMismatch, false, `the server's recomputation agrees: ${JSON.stringify(onServer.mismatch)}`);
+      const rawOnServer = detail.attachments.find((a) => a.id === onServer.rawAttachmentId);
+      assert.equal(rawOnServer.kind, 'raw-scan');
+      assert.equal(rawOnServer.sha256, onServer.rawSha256);
+      const bytes = Buffer.from(await (await api(`/api/attachments/${rawOnServer.id}/content`, token)).arrayBuffer());
+      assert.ok(bytes.equals(raw), 'the raw file is kept byte for byte');
+      assert.deepEqual(detail.escalations.map((e) => [e.scanId, e.status]), [[scan.id, 'raised']]);
+      assert.ok(detail.escalations[0].hazardClasses.length > 0);
+
+      // The next pull brings the server's check to the tablet.
+      await page.getByTestId('sync-now').filter({ visible: true }).click();
+      await waitForSynced(page);
+      await page.goto(scanUrl);
+      await waitForPage(page, 'Scan of HS7-01');
+      await page.locator('[data-testid="server-check"][data-mismatch="false"]').filter({ visible: true }).waitFor();
+      await assertAccessible(page, 'the synced scan');
+      await screenshot(page, 'capture-sample-scan-synced-800x1280');
+      await page.goto(`${baseUrl}/tabs/cases/${caseId}`);
+      await waitForPage(page, SITE);
     });
 
     it('shows both copies when the case changed on the server too, and "keep mine" sends the tablet copy on top', async () => {

@@ -1,5 +1,5 @@
 /** The entities the tablet records in the field and syncs (names as the sync protocol spells them). */
-export type CaptureEntity = 'case' | 'sample' | 'handover' | 'note' | 'attachment';
+export type CaptureEntity = 'case' | 'sample' | 'handover' | 'note' | 'attachment' | 'scan' | 'escalation' | 'instrumentCheck';
 
 /** A record's sync state as the inspector sees it. */
 export type SyncState = 'local' | 'sending' | 'server' | 'conflict';

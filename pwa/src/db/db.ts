@@ -9,6 +9,9 @@ import type { NoteRow } from './notesTable';
 import { outboxSchema, type OutboxRow } from './outboxTable';
 import type { PhotoRow } from './photosTable';
 import type { SampleRow } from './samplesTable';
+import type { ScanRow } from './scansTable';
+import type { EscalationRow } from './escalationsTable';
+import type { CaseCheckRow } from './caseChecksTable';
 import { syncMetaSchema, type SyncMetaRow } from './syncMetaTable';
 
 /** Siteband's on-device database; each later version bump adds its own upgrade step here. */
@@ -23,6 +26,9 @@ export class SitebandDb extends Dexie {
   photos!: EntityTable<PhotoRow, 'id'>;
   outbox!: EntityTable<OutboxRow, 'seq'>;
   syncMeta!: EntityTable<SyncMetaRow, 'key'>;
+  scans!: EntityTable<ScanRow, 'id'>;
+  escalations!: EntityTable<EscalationRow, 'id'>;
+  caseChecks!: EntityTable<CaseCheckRow, 'id'>;
 
   constructor(name = 'siteband') {
     super(name);
@@ -49,6 +55,11 @@ export class SitebandDb extends Dexie {
         syncMeta: syncMetaSchema,
       })
       .upgrade(() => undefined);
+    // Version 5: scans, escalations and the instrument checks recorded per case. Earlier pulls skipped their records while moving the
+    // cursor past them, so the cursor starts over: already-known records merge as unchanged.
+    this.version(5)
+      .stores({ scans: captureRowSchema, escalations: captureRowSchema, caseChecks: captureRowSchema })
+      .upgrade((tx) => tx.table('syncMeta').delete('pullCursor'));
   }
 }
 

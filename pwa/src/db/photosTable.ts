@@ -1,10 +1,10 @@
 import type { CaptureRow } from './captureRecord';
 
-/** A photo's metadata as the tablet sends it (PROTOCOL.md, entity `attachment`, kind `photo`). */
+/** An attachment's metadata as the tablet sends it (PROTOCOL.md, entity `attachment`): a photo, or a scan's raw file. */
 export interface PhotoData {
-  ownerType: 'case' | 'sample';
+  ownerType: 'case' | 'sample' | 'scan';
   ownerId: string;
-  kind: 'photo';
+  kind: 'photo' | 'raw-scan';
   fileName: string;
   contentType: string;
   size: number;
@@ -13,7 +13,7 @@ export interface PhotoData {
 }
 
 /**
- * One row of the `photos` table. The bytes are an ArrayBuffer rather than a Blob: every IndexedDB
+ * One row of the `photos` table, which holds every attachment (photos and raw scan files). The bytes are an ArrayBuffer rather than a Blob: every IndexedDB
  * implementation clones ArrayBuffers, while Blob support differs (the test database has none).
  */
 export interface PhotoRow extends CaptureRow<PhotoData> {

@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { useEffect, useState, type ReactNode } from 'react';
 import { IonSpinner } from '@ionic/react';
 import { useTranslation } from 'react-i18next';
 import type { IdentifyResult } from '@siteband/shared';
@@ -10,30 +10,42 @@ import { ScanResultPanel } from '../components/spectrum/ScanResultPanel';
 import { ScanSettingsForm } from '../components/spectrum/ScanSettingsForm';
 import { ProcessingPanel } from '../components/spectrum/ProcessingPanel';
 import { identifyClient } from '../features/identify/identifyWorker';
-import type { IdentifyOutcome } from '../features/identify/protocol';
+import type { IdentifyOutcome, ScanFile } from '../features/identify/protocol';
 import { DEFAULT_SCAN_SETTINGS, type ScanSettings } from '../features/identify/scanSettings';
 import { useScanIdentification } from '../features/identify/useScanIdentification';
 import { useLibrary } from '../features/library/useLibrary';
 
+/** A result the inspector acknowledged, with everything needed to save it to a sample. */
+export interface AcknowledgedScan {
+  readonly settings: ScanSettings;
+  readonly file: ScanFile;
+  readonly outcome: IdentifyOutcome;
+  /** ISO time of the acknowledgement. */
+  readonly acknowledgedAt: string;
+}
+
 /**
- * The inspector's scan screen: how the scan was taken, the instrument's file, then the likely
- * compounds. Until scans are saved to cases, the acknowledgement lives only on this screen.
+ * The scan screen's body: how the scan was taken, the instrument's file, then the likely
+ * compounds. `afterAcknowledge` renders under an acknowledged result (a sample's save action);
+ * on the Capture tab alone the acknowledgement lives only on this screen.
  */
-export default function CapturePage() {
+export function ScanCapture({ afterAcknowledge }: { afterAcknowledge?: (scan: AcknowledgedScan) => ReactNode }) {
   const { t } = useTranslation();
   const [scan, setScan] = useState<ScanSettings>(DEFAULT_SCAN_SETTINGS);
   const library = useLibrary().data;
   // Rank against the library in force (supervisors' edits) once the tablet has received it.
-  const { state, processing, setProcessing, chooseFile } = useScanIdentification(identifyClient, scan, library?.source === 'bundled' ? undefined : library?.library);
-  const [acknowledgedFor, setAcknowledgedFor] = useState<IdentifyResult | null>(null);
+  const { state, processing, setProcessing, chooseFile, file } = useScanIdentification(identifyClient, scan, library?.source === 'bundled' ? undefined : library?.library);
+  const [acknowledged, setAcknowledged] = useState<{ result: IdentifyResult; at: string } | null>(null);
   // Start the worker as the screen opens, so the library indices are built before the first file.
   useEffect(() => {
     identifyClient();
   }, []);
   const outcome: IdentifyOutcome | null = state.status === 'done' ? state.outcome : state.status === 'running' ? state.previous : null;
 
+  const acknowledgedOutcome = state.status === 'done' && acknowledged?.result === state.outcome.result ? state.outcome : null;
+
   return (
-    <PageShell title={t('pages.capture.title')}>
+    <>
       <section className="sb-panel" aria-labelledby="scan-heading">
         <h2 id="scan-heading" className="sb-panel__heading">
           {t('identify.scan.heading')}
@@ -75,11 +87,22 @@ export default function CapturePage() {
           <ProcessingPanel used={outcome.processed.parameters} value={processing} onApply={setProcessing} busy={state.status === 'running'} />
           <ScanResultPanel
             outcome={outcome}
-            acknowledged={acknowledgedFor === outcome.result}
-            onAcknowledge={setAcknowledgedFor}
+            acknowledged={acknowledged?.result === outcome.result}
+            onAcknowledge={(result) => setAcknowledged({ result, at: new Date().toISOString() })}
           />
+          {acknowledgedOutcome && file && afterAcknowledge?.({ settings: scan, file, outcome: acknowledgedOutcome, acknowledgedAt: acknowledged!.at })}
         </>
       )}
+    </>
+  );
+}
+
+/** The Capture tab's scan screen, not bound to a sample. */
+export default function CapturePage() {
+  const { t } = useTranslation();
+  return (
+    <PageShell title={t('pages.capture.title')}>
+      <ScanCapture />
     </PageShell>
   );
 }

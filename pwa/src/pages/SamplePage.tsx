@@ -1,5 +1,4 @@
-import { IonButton, IonIcon } from '@ionic/react';
-import { pulseOutline } from 'ionicons/icons';
+import { IonButton } from '@ionic/react';
 import { useTranslation } from 'react-i18next';
 import { useNavigate, useParams } from 'react-router-dom';
 import { HandoverPanel } from '../components/cases/HandoverPanel';
@@ -17,8 +16,9 @@ import { emptySampleDraft, sampleDraftOf } from '../features/samples/sampleDraft
 import { saveSample } from '../features/samples/saveSample';
 import { useSample } from '../features/samples/useSamples';
 import { useSession } from '../features/session/SessionProvider';
+import { SampleScanList } from './SampleScanList';
 
-/** A new sample (no sample id in the route) or one sample with its photos, chain of custody and notes. */
+/** A new sample (no sample id in the route) or one sample with its photos, chain of custody, notes and scans. */
 export default function SamplePage() {
   const { t } = useTranslation();
   const { id: caseId = '', sampleId } = useParams();
@@ -69,16 +69,7 @@ export default function SamplePage() {
           <PhotoPicker caseId={caseId} sampleId={sample.id} sampleLabel={sample.data.label} editable={editable} />
           <HandoverPanel caseId={caseId} sampleId={sample.id} defaultFrom={sample.data.collectedBy} editable={editable} />
           <NotesPanel caseId={caseId} sampleId={sample.id} editable={editable} />
-          <section className="sb-panel" aria-labelledby="scan-step-heading">
-            <h2 id="scan-step-heading" className="sb-panel__heading">
-              {t('capture.scanStep.heading')}
-            </h2>
-            <p className="sb-muted">{t('capture.scanStep.body')}</p>
-            <IonButton fill="outline" routerLink={casePaths.scan}>
-              <IonIcon icon={pulseOutline} slot="start" aria-hidden="true" />
-              {t('capture.scanStep.open')}
-            </IonButton>
-          </section>
+          <SampleScanList caseId={caseId} sampleId={sample.id} editable={editable} />
         </>
       )}
       <CautionNote laser />

@@ -13,6 +13,7 @@ import CasesPage from './CasesPage';
 import CaseEditPage from './CaseEditPage';
 import CasePage from './CasePage';
 import SamplePage from './SamplePage';
+import SampleScanPage from './SampleScanPage';
 import CapturePage from './CapturePage';
 import InstrumentCheckPage from './InstrumentCheckPage';
 import ReviewQueuePage from './ReviewQueuePage';
@@ -33,6 +34,7 @@ const TAB_ROUTES: Readonly<Record<TabId, readonly { path: string; Page: Componen
     { path: 'cases/:id/edit', Page: CaseEditPage },
     { path: 'cases/:id/samples/new', Page: SamplePage },
     { path: 'cases/:id/samples/:sampleId', Page: SamplePage },
+    { path: 'cases/:id/samples/:sampleId/scans/:scanId', Page: SampleScanPage },
   ],
   capture: [
     { path: 'capture', Page: CapturePage },

@@ -44,5 +44,5 @@ export function useScanIdentification(client: () => IdentifyClient, scan: ScanSe
     setFile(next);
   }, []);
 
-  return { state, processing, setProcessing, chooseFile };
+  return { state, processing, setProcessing, chooseFile, file };
 }

@@ -1,7 +1,7 @@
-import type { ByteSender } from './uploadPhotos';
+import type { ByteSender } from './uploadAttachments';
 
 /**
- * Sends photo bytes with the session's bearer token. The JSON API client has no raw-body request,
+ * Sends attachment bytes with the session's bearer token. The JSON API client has no raw-body request,
  * so this is the one other place that calls fetch; a 401 is handed back to the uploader, which
  * asks the status route through the API client (and so refreshes the token) before going on.
  */

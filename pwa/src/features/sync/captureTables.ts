@@ -9,22 +9,25 @@ export const TABLET_FIELDS: Readonly<Record<CaptureEntity, readonly string[]>> =
   handover: ['sampleId', 'from', 'to', 'at', 'sealNumber', 'note'],
   note: ['caseId', 'sampleId', 'text', 'recordedAt'],
   attachment: ['ownerType', 'ownerId', 'kind', 'fileName', 'contentType', 'size', 'sha256'],
+  scan: ['sampleId', 'technique', 'phase', 'excitationNm', 'recordedAt', 'instrumentCheckId', 'rawAttachmentId', 'rawSha256', 'parsedSummary', 'result', 'inspectorAcknowledgedAt'],
+  escalation: ['caseId', 'scanId', 'raisedAt', 'reason', 'hazardClasses'],
+  instrumentCheck: ['caseId', 'standardId', 'performedAt', 'passed', 'offsets'],
 };
 
-/** True for the entities this tablet keeps (scans and instrument checks live elsewhere). */
+/** True for the entities this tablet keeps and merges from a pull. */
 export function isCaptureEntity(entity: string): entity is CaptureEntity {
   return Object.hasOwn(TABLET_FIELDS, entity);
 }
 
 /** The Dexie table that holds an entity's rows. */
 export function tableFor(db: SitebandDb, entity: CaptureEntity): Table<CaptureRow<unknown>, string> {
-  const tables = { case: db.cases, sample: db.samples, handover: db.handovers, note: db.notes, attachment: db.photos };
+  const tables = { case: db.cases, sample: db.samples, handover: db.handovers, note: db.notes, attachment: db.photos, scan: db.scans, escalation: db.escalations, instrumentCheck: db.caseChecks };
   return tables[entity] as unknown as Table<CaptureRow<unknown>, string>;
 }
 
 /** Every capture table plus the outbox: the scope of a transaction that writes a record and its change. */
 export function captureScope(db: SitebandDb) {
-  return [db.cases, db.samples, db.handovers, db.notes, db.photos, db.outbox];
+  return [db.cases, db.samples, db.handovers, db.notes, db.photos, db.scans, db.escalations, db.caseChecks, db.outbox];
 }
 
 /** The server's data reduced to the fields the tablet sends, so a taken-over record can be pushed again. */
@@ -32,13 +35,14 @@ export function tabletData(entity: CaptureEntity, data: Record<string, unknown>)
   return Object.fromEntries(TABLET_FIELDS[entity].filter((field) => field in data).map((field) => [field, data[field]]));
 }
 
-/** The case a record belongs to, read from its data (a hand-over's case comes from its sample). */
+/** The case a record belongs to, read from its data (a hand-over's or scan's case comes from its sample). */
 export async function caseIdOf(db: SitebandDb, entity: CaptureEntity, id: string, data: Record<string, unknown>): Promise<string | undefined> {
   if (entity === 'case') return id;
   if (typeof data.caseId === 'string') return data.caseId;
-  if (entity === 'handover' && typeof data.sampleId === 'string') return (await db.samples.get(data.sampleId))?.caseId;
+  if ((entity === 'handover' || entity === 'scan') && typeof data.sampleId === 'string') return (await db.samples.get(data.sampleId))?.caseId;
   if (entity === 'attachment' && typeof data.ownerId === 'string') {
     if (data.ownerType === 'case') return data.ownerId;
+    if (data.ownerType === 'scan') return (await db.scans.get(data.ownerId))?.caseId;
     return (await db.samples.get(data.ownerId))?.caseId;
   }
   return undefined;

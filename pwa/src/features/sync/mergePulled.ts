@@ -2,6 +2,7 @@ import type { SitebandDb } from '../../db/db';
 import type { CaptureRow, ServerRecord } from '../../db/captureRecord';
 import { caseIdOf, captureScope, isCaptureEntity, tableFor, tabletData } from './captureTables';
 import { entriesFor, refreshSyncState } from './syncState';
+import { serverCheckOf } from '../scans/serverCheck';
 
 /**
  * Merges one pulled record. A local record with changes the server has not applied is never
@@ -17,6 +18,8 @@ export async function mergePulled(db: SitebandDb, record: ServerRecord, now = Da
     if (local && local.version === record.version && !record.deleted) {
       // Our own write coming back (or an upload finishing): only the upload time may be new.
       if (entity === 'attachment' && typeof record.data.uploadedAt === 'string') await db.photos.update(record.id, { uploadedAt: record.data.uploadedAt });
+      // ...or the server's recomputation of a scan, written with a new syncSeq at the same version.
+      if (entity === 'scan') await db.scans.update(record.id, { serverCheck: serverCheckOf(record.data) });
       await refreshSyncState(db, entity, record.id);
       return 'same';
     }
@@ -46,6 +49,7 @@ export async function mergePulled(db: SitebandDb, record: ServerRecord, now = Da
       row.uploadedAt = typeof record.data.uploadedAt === 'string' ? record.data.uploadedAt : null;
       row.receivedBytes = Number(record.data.receivedBytes ?? 0);
     }
+    if (entity === 'scan') row.serverCheck = serverCheckOf(record.data);
     await table.put(row);
     return 'stored';
   });

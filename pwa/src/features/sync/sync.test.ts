@@ -12,7 +12,7 @@ import { resolveConflict } from './resolveConflict';
 import { createSyncEngine } from './syncEngine';
 import { everythingSynced } from './syncState';
 import { createTestServer, type TestServer } from './testServer';
-import { CHUNK_BYTES, type ByteSender } from './uploadPhotos';
+import { CHUNK_BYTES, type ByteSender } from './uploadAttachments';
 
 let db: SitebandDb | undefined;
 let count = 0;
@@ -185,7 +185,7 @@ describe('merging a pull', () => {
     const row = await d.cases.get(id);
     expect(row?.data.weatherNotes).toBe('Rain');
     expect(row).toMatchObject({ sync: 'conflict', conflictServer: { version: 2 } });
-    expect(await mergePulled(d, { ...record, entity: 'scan' })).toBe('skipped');
+    expect(await mergePulled(d, { ...record, entity: 'review' })).toBe('skipped');
   });
 });
 

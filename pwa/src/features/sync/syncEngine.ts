@@ -3,7 +3,7 @@ import type { ApiClient } from '../api/client';
 import { backoffDelayMs, type BackoffOptions } from './backoff';
 import { pullChanges } from './pullChanges';
 import { pushOutbox } from './pushOutbox';
-import { uploadPhotos, type ByteSender } from './uploadPhotos';
+import { uploadAttachments, type ByteSender } from './uploadAttachments';
 
 /** What the screens show about sync as a whole. */
 export interface SyncStatus {
@@ -30,7 +30,7 @@ export interface SyncEngineOptions {
 }
 
 export interface SyncEngine {
-  /** Runs one cycle (push, upload photos, pull); a call during a cycle joins the running one. */
+  /** Runs one cycle (push, upload attachments, pull); a call during a cycle joins the running one. */
   syncNow(): Promise<SyncStatus>;
   status(): SyncStatus;
   subscribe(listener: () => void): () => void;
@@ -64,7 +64,7 @@ export function createSyncEngine(options: SyncEngineOptions): SyncEngine {
     try {
       // Push before pull, so a pulled record never meets a change whose answer was merely lost.
       await pushOutbox(db, api, typeof clientId === 'string' ? clientId : await clientId());
-      await uploadPhotos(db, api, sender);
+      await uploadAttachments(db, api, sender);
       await pullChanges(db, api);
       set({ running: false, lastSuccessAt: now(), lastError: null, failures: 0 });
     } catch (error) {

@@ -26,31 +26,31 @@ async function save(db: SitebandDb, id: string, status: AttachmentStatus): Promi
 }
 
 /**
- * Uploads one photo's bytes in chunks with Content-Range, resuming from the offset the server
+ * Uploads one attachment's bytes (a photo or a scan's raw file) in chunks with Content-Range, resuming from the offset the server
  * reports. A 409 (offset moved) or 401 asks the server where it stands and carries on; a 422 (hash
  * mismatch, the server discarded everything) starts over once.
  */
-export async function uploadPhoto(db: SitebandDb, api: ApiClient, sender: ByteSender, photo: PhotoRow): Promise<void> {
-  const bytes = photo.bytes;
+export async function uploadAttachment(db: SitebandDb, api: ApiClient, sender: ByteSender, attachment: PhotoRow): Promise<void> {
+  const bytes = attachment.bytes;
   if (!bytes) return;
   const size = bytes.byteLength;
-  let offset = photo.receivedBytes;
+  let offset = attachment.receivedBytes;
   let restarts = 0;
   for (let guard = 0; guard < Math.ceil(size / CHUNK_BYTES) + 8; guard += 1) {
-    if (offset >= size) offset = (await serverStatus(api, photo.id)).receivedBytes;
+    if (offset >= size) offset = (await serverStatus(api, attachment.id)).receivedBytes;
     const end = Math.min(offset + CHUNK_BYTES, size) - 1;
-    const response = await sender.put(`/api/attachments/${photo.id}/content`, bytes.slice(offset, end + 1), {
-      'Content-Type': photo.data.contentType,
+    const response = await sender.put(`/api/attachments/${attachment.id}/content`, bytes.slice(offset, end + 1), {
+      'Content-Type': attachment.data.contentType,
       'Content-Range': `bytes ${offset}-${end}/${size}`,
     });
     if (response.ok) {
       const status = (await response.json()) as AttachmentStatus;
-      await save(db, photo.id, status);
+      await save(db, attachment.id, status);
       if (status.complete) return;
       offset = status.receivedBytes;
     } else if (response.status === 409 || response.status === 401) {
-      const status = await serverStatus(api, photo.id);
-      await save(db, photo.id, status);
+      const status = await serverStatus(api, attachment.id);
+      await save(db, attachment.id, status);
       if (status.complete) return;
       offset = status.receivedBytes;
     } else if (response.status === 422 && restarts === 0) {
@@ -60,12 +60,12 @@ export async function uploadPhoto(db: SitebandDb, api: ApiClient, sender: ByteSe
       throw await ApiError.fromResponse(response);
     }
   }
-  throw new Error(`The upload of ${photo.data.fileName} made no progress`);
+  throw new Error(`The upload of ${attachment.data.fileName} made no progress`);
 }
 
-/** Uploads every photo whose metadata the server holds and whose bytes it has not verified yet. */
-export async function uploadPhotos(db: SitebandDb, api: ApiClient, sender: ByteSender): Promise<number> {
+/** Uploads every attachment whose metadata the server holds and whose bytes it has not verified yet. */
+export async function uploadAttachments(db: SitebandDb, api: ApiClient, sender: ByteSender): Promise<number> {
   const waiting = await db.photos.filter((p) => p.version !== null && p.uploadedAt === null && p.bytes !== undefined).toArray();
-  for (const photo of waiting) await uploadPhoto(db, api, sender, photo);
+  for (const attachment of waiting) await uploadAttachment(db, api, sender, attachment);
   return waiting.length;
 }

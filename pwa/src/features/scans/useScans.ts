@@ -1,0 +1,25 @@
+import { useLiveQuery } from 'dexie-react-hooks';
+import type { EscalationRow } from '../../db/escalationsTable';
+import type { PhotoRow } from '../../db/photosTable';
+import type { ScanRow } from '../../db/scansTable';
+import { captureDb } from '../cases/captureDb';
+
+/** Live: a sample's scans, newest first. */
+export function useSampleScans(sampleId: string): ScanRow[] | undefined {
+  return useLiveQuery(async () => {
+    const rows = await captureDb().scans.filter((s) => s.data.sampleId === sampleId).toArray();
+    return rows.sort((a, b) => b.data.recordedAt.localeCompare(a.data.recordedAt));
+  }, [sampleId]);
+}
+
+/** Live: one scan with its raw file's attachment and its escalations; null when the tablet has no such scan. */
+export function useScanRecord(scanId: string): { scan: ScanRow; raw: PhotoRow | null; escalations: EscalationRow[] } | null | undefined {
+  return useLiveQuery(async () => {
+    const db = captureDb();
+    const scan = await db.scans.get(scanId);
+    if (!scan) return null;
+    const raw = (await db.photos.get(scan.data.rawAttachmentId)) ?? null;
+    const escalations = await db.escalations.filter((e) => e.data.scanId === scanId).toArray();
+    return { scan, raw, escalations };
+  }, [scanId]);
+}
