@@ -6,5 +6,4 @@ export const casePaths = {
   edit: (id: string) => `/tabs/cases/${id}/edit`,
   newSample: (caseId: string) => `/tabs/cases/${caseId}/samples/new`,
   sample: (caseId: string, sampleId: string) => `/tabs/cases/${caseId}/samples/${sampleId}`,
-  scan: '/tabs/capture',
 };
