@@ -1,5 +1,4 @@
-import { BadRequestException, Body, Controller, HttpCode, Post, UploadedFile, UseInterceptors } from '@nestjs/common';
-import { FileInterceptor } from '@nestjs/platform-express';
+import { BadRequestException, Body, Controller, HttpCode, Post, UploadedFile } from '@nestjs/common';
 import {
   ApiBadRequestResponse,
   ApiBearerAuth,
@@ -15,6 +14,7 @@ import {
 } from '@nestjs/swagger';
 import { DEFAULT_MAX_IMPORT_BYTES } from '@siteband/shared';
 import { ErrorResponseDto } from '../common/error-response.dto';
+import { SingleFileUpload } from '../common/single-file-upload';
 import { IdentifyRequestDto, PHASES, TECHNIQUES } from './dto/identify-request.dto';
 import { IdentifyResultDto } from './dto/identify-result.dto';
 import { IdentifyService, type IdentifyAnswer, type UploadedScanFile } from './identify.service';
@@ -30,8 +30,7 @@ export class IdentifyController {
 
   @Post()
   @HttpCode(200)
-  // Multer reads multipart bodies only; a JSON body passes straight through to the validation pipe.
-  @UseInterceptors(FileInterceptor('file', { limits: { fileSize: DEFAULT_MAX_IMPORT_BYTES, files: 1, fields: 10, fieldSize: 1024 } }))
+  @SingleFileUpload(DEFAULT_MAX_IMPORT_BYTES)
   @ApiOperation({
     summary: 'Likely compounds for a scan',
     description:

@@ -1,5 +1,4 @@
-import { BadRequestException, Body, Controller, HttpCode, Post, UploadedFile, UseInterceptors } from '@nestjs/common';
-import { FileInterceptor } from '@nestjs/platform-express';
+import { BadRequestException, Body, Controller, HttpCode, Post, UploadedFile } from '@nestjs/common';
 import {
   ApiBadRequestResponse,
   ApiBearerAuth,
@@ -15,6 +14,7 @@ import {
 } from '@nestjs/swagger';
 import type { StructureCheck } from '@siteband/shared';
 import { ErrorResponseDto } from '../common/error-response.dto';
+import { SingleFileUpload } from '../common/single-file-upload';
 import { MAX_STRUCTURE_BYTES, StructureCheckRequestDto } from './dto/structure-check-request.dto';
 import { StructureCheckDto } from './dto/structure-check.dto';
 import { SymmetryService, type UploadedStructureFile } from './symmetry.service';
@@ -30,8 +30,7 @@ export class SymmetryController {
 
   @Post()
   @HttpCode(200)
-  // Multer reads multipart bodies only; a JSON body passes straight through to the validation pipe.
-  @UseInterceptors(FileInterceptor('file', { limits: { fileSize: MAX_STRUCTURE_BYTES, files: 1, fields: 10, fieldSize: 1024 } }))
+  @SingleFileUpload(MAX_STRUCTURE_BYTES)
   @ApiOperation({
     summary: 'Structure check: point group, Γvib and IR/Raman activity of a structure',
     description: 'JSON `{ structure, format?, tolerance?, convention? }`, or the file as multipart field `file` with the same options as fields.',
