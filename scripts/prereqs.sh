@@ -13,6 +13,8 @@ if [ "$mode" = test ]; then
   /usr/bin/python3 -c 'import pymatgen.symmetry.analyzer' >/dev/null 2>&1 || need+=(python3-pymatgen)
   /usr/bin/python3 -c 'import ase.collections' >/dev/null 2>&1 || need+=(python3-ase)
   /usr/bin/python3 -c 'import scipy.signal' >/dev/null 2>&1 || need+=(python3-scipy)
+  # pdftotext reads the case reports back in the tests.
+  command -v pdftotext >/dev/null 2>&1 || need+=(poppler-utils)
 fi
 if [ ${#need[@]} -gt 0 ]; then
   echo "Installing Debian packages: ${need[*]}"
