@@ -4,6 +4,7 @@ import en from './en.json';
 import identify from './en/identify.json';
 import library from './en/library.json';
 import capture from './en/capture.json';
+import events from './en/events.json';
 
 /** Languages with a complete resource file; English is the source language. */
 export const SUPPORTED_LANGUAGES = ['en'] as const;
@@ -19,7 +20,7 @@ function storedLanguage(): Language {
 /** Starts i18next with every bundled resource (no network loading: the app must work offline). */
 export async function initI18n(): Promise<typeof i18next> {
   await i18next.use(initReactI18next).init({
-    resources: { en: { translation: { ...en, identify, library, capture } } },
+    resources: { en: { translation: { ...en, identify, library, capture, events } } },
     lng: storedLanguage(),
     fallbackLng: 'en',
     interpolation: { escapeValue: false },

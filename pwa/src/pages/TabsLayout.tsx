@@ -5,7 +5,9 @@ import { useTranslation } from 'react-i18next';
 import { TAB_ICONS } from '../components/tabIcons';
 import { homePathForRole, tabsForRole, type TabId } from '../features/navigation/roleTabs';
 import { useSession } from '../features/session/SessionProvider';
+import { EventsProvider } from '../features/events/EventsProvider';
 import { SyncProvider } from '../features/sync/SyncProvider';
+import { SyncOnLiveEvents } from '../features/sync/SyncOnLiveEvents';
 // Tab pages are imported here, not lazily: a lazy page inside Ionic's nested tab outlet was seen
 // to stay at opacity 0 after its first entry (Ionic 9.0.4). The whole signed-in area is one chunk
 // loaded after sign-in instead, which keeps it out of the first paint all the same.
@@ -70,23 +72,26 @@ export default function TabsLayout() {
   const home = homePathForRole(role);
   return (
     <SyncProvider>
-      <IonTabs>
-        <IonRouterOutlet>
-          {tabs.flatMap((tab) =>
-            TAB_ROUTES[tab.id].map(({ path, Page }) => <Route key={path} path={path} element={<Page />} />),
-          )}
-          <Route index element={<Navigate to={home} replace />} />
-          <Route path="*" element={<Navigate to={home} replace />} />
-        </IonRouterOutlet>
-        <IonTabBar slot="bottom" className="sb-tabbar" aria-label={t('nav.tabBar')}>
-          {tabs.map((tab) => (
-            <IonTabButton key={tab.id} tab={tab.id} href={tab.path} className="sb-tab" data-testid={`tab-${tab.id}`}>
-              <IonIcon icon={TAB_ICONS[tab.id]} aria-hidden="true" />
-              <IonLabel>{t(tab.labelKey)}</IonLabel>
-            </IonTabButton>
-          ))}
-        </IonTabBar>
-      </IonTabs>
+      <EventsProvider>
+        <SyncOnLiveEvents enabled={role === 'inspector'} />
+        <IonTabs>
+          <IonRouterOutlet>
+            {tabs.flatMap((tab) =>
+              TAB_ROUTES[tab.id].map(({ path, Page }) => <Route key={path} path={path} element={<Page />} />),
+            )}
+            <Route index element={<Navigate to={home} replace />} />
+            <Route path="*" element={<Navigate to={home} replace />} />
+          </IonRouterOutlet>
+          <IonTabBar slot="bottom" className="sb-tabbar" aria-label={t('nav.tabBar')}>
+            {tabs.map((tab) => (
+              <IonTabButton key={tab.id} tab={tab.id} href={tab.path} className="sb-tab" data-testid={`tab-${tab.id}`}>
+                <IonIcon icon={TAB_ICONS[tab.id]} aria-hidden="true" />
+                <IonLabel>{t(tab.labelKey)}</IonLabel>
+              </IonTabButton>
+            ))}
+          </IonTabBar>
+        </IonTabs>
+      </EventsProvider>
     </SyncProvider>
   );
 }

@@ -99,6 +99,31 @@ describe('API client', () => {
     expect(tokens.current()).toEqual({ accessToken: 'access-2', refreshToken: 'refresh-2' });
   });
 
+  it('hands back the raw response of an authorized fetch, refreshing once on a 401', async () => {
+    const api = fakeApi();
+    const tokens = memoryTokens({ accessToken: 'access-1', refreshToken: 'refresh-1' });
+    const client = createApiClient({ tokens, fetchFn: api.fetchFn });
+    api.expireAccessToken();
+    const response = await client.authorizedFetch('/api/me', { headers: { Accept: 'text/event-stream' } });
+    expect(response.status).toBe(200);
+    await expect(response.json()).resolves.toEqual(user);
+    expect(api.calls.map((c) => [c.path, c.authorization])).toEqual([
+      ['/api/me', 'Bearer access-1'],
+      ['/api/auth/refresh', null],
+      ['/api/me', 'Bearer access-2'],
+    ]);
+  });
+
+  it('answers the 401 of an authorized fetch as it is when the session has ended', async () => {
+    const api = fakeApi({ refreshStatus: 401 });
+    const tokens = memoryTokens({ accessToken: 'access-1', refreshToken: 'refresh-1' });
+    const client = createApiClient({ tokens, fetchFn: api.fetchFn });
+    api.expireAccessToken();
+    const response = await client.authorizedFetch('/api/me');
+    expect(response.status).toBe(401);
+    expect(tokens.cleared).toBe(1);
+  });
+
   it('shares one refresh between requests that fail together, since refresh tokens rotate', async () => {
     const api = fakeApi();
     const tokens = memoryTokens({ accessToken: 'access-1', refreshToken: 'refresh-1' });

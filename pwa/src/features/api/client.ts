@@ -29,6 +29,11 @@ export interface RequestOptions {
 /** The one door to the API: feature modules call this, nothing else calls fetch. */
 export interface ApiClient {
   request<T>(path: string, options?: RequestOptions): Promise<T>;
+  /**
+   * A fetch with the bearer token and the same one refresh on 401, answering the raw response:
+   * for streams the JSON reader cannot take (the live events). The caller reads the status.
+   */
+  authorizedFetch(input: RequestInfo | URL, init?: RequestInit): Promise<Response>;
 }
 
 export interface ApiClientOptions {
@@ -97,18 +102,29 @@ export function createApiClient({ tokens, fetchFn = (...args) => fetch(...args) 
     }
   }
 
+  /** Sends with the current access token; on a 401 once more with a refreshed one. */
+  async function withToken(auth: boolean, attempt: (accessToken: string | undefined) => Promise<Response>): Promise<Response> {
+    const usedToken = auth ? tokens.current()?.accessToken : undefined;
+    const first = await attempt(usedToken);
+    if (first.status !== 401 || !usedToken) return first;
+
+    // Another request may already have refreshed while this one was in flight: reuse its token.
+    const latest = tokens.current()?.accessToken;
+    const nextToken = latest && latest !== usedToken ? latest : await refreshOnce();
+    if (!nextToken) return first;
+    return attempt(nextToken);
+  }
+
   return {
     async request<T>(path: string, options: RequestOptions = {}): Promise<T> {
-      const auth = options.auth ?? true;
-      const usedToken = auth ? tokens.current()?.accessToken : undefined;
-      const first = await send(path, options, usedToken);
-      if (first.status !== 401 || !usedToken) return read<T>(first);
-
-      // Another request may already have refreshed while this one was in flight: reuse its token.
-      const latest = tokens.current()?.accessToken;
-      const nextToken = latest && latest !== usedToken ? latest : await refreshOnce();
-      if (!nextToken) return read<T>(first);
-      return read<T>(await send(path, options, nextToken));
+      return read<T>(await withToken(options.auth ?? true, (token) => send(path, options, token)));
+    },
+    authorizedFetch(input, init = {}) {
+      return withToken(true, (token) => {
+        const headers = new Headers(init.headers);
+        if (token) headers.set('Authorization', `Bearer ${token}`);
+        return fetchFn(input, { ...init, headers });
+      });
     },
   };
 }

@@ -28,7 +28,7 @@ function serverBody() {
 }
 
 function client(answer: () => Promise<unknown>): ApiClient {
-  return { request: <T,>() => answer() as Promise<T> };
+  return { request: <T,>() => answer() as Promise<T>, authorizedFetch: () => Promise.reject(new Error('readLibrary reads JSON only')) };
 }
 
 describe('readLibrary', () => {

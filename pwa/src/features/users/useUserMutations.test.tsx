@@ -28,6 +28,7 @@ function memoryUsersApi(refuse: boolean) {
       }
       throw new Error(`unexpected ${options.method} ${path}`);
     },
+    authorizedFetch: () => Promise.reject(new Error('the users screens read JSON only')),
   };
   return client;
 }
