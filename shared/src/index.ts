@@ -11,3 +11,4 @@ export * from './structure-check/index.js';
 export * from './chem/index.js';
 export * from './contours/index.js';
 export * from './symmetry/detect/index.js';
+export * from './case-archive/index.js';
