@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { AuditModule } from './audit/audit.module';
 import { AttachmentsModule } from './attachments/attachments.module';
 import { AuthModule } from './auth/auth.module';
 import { CasesModule } from './cases/cases.module';
@@ -35,6 +36,7 @@ import { UsersModule } from './users/users.module';
     LibraryModule,
     IdentifyModule,
     SymmetryModule,
+    AuditModule,
   ],
 })
 export class AppModule {}

@@ -1,5 +1,6 @@
 import { Injectable } from '@nestjs/common';
-import { DataSource, type EntityManager } from 'typeorm';
+import { DataSource } from 'typeorm';
+import { AuditService } from '../audit/audit.service';
 import type { AuthenticatedUser } from '../auth/authenticated-user';
 import { ChangeEnvelopeDto } from './dto/change-envelope.dto';
 import type { ChangeResultDto } from './dto/change-result.dto';
@@ -27,6 +28,7 @@ export class ChangeApplier {
   constructor(
     private readonly dataSource: DataSource,
     private readonly registry: SyncRegistry,
+    private readonly audit: AuditService,
   ) {}
 
   /** Validates, authorises and applies one change; never throws for a bad change (only for server faults). */
@@ -79,12 +81,13 @@ export class ChangeApplier {
     if (change.op === 'delete') {
       if (!existing) throw new ChangeRejected(`There is no ${change.entity} ${change.id} on the server to delete`);
       // Authorise before anything about the row is revealed.
-      await handler.authorize(ctx, change.id, null, existing);
+      const caseId = await handler.authorize(ctx, change.id, null, existing);
       if (change.baseVersion !== existing.version) return conflict(existing);
       if (handler.appendOnly) throw new ChangeRejected(`A ${change.entity} is a permanent record: it cannot be deleted`);
       if (existing.deletedAt) throw new ChangeRejected(`This ${change.entity} is already deleted`);
+      const before = structuredClone(handler.toData(existing));
       existing.deletedAt = new Date();
-      return this.write(ctx.manager, handler, existing, counter, change.changeId);
+      return this.write(ctx, handler, existing, counter, change.changeId, { caseId, action: 'delete', before });
     }
 
     const data = validateData(handler.dataClass, change.data);
@@ -96,26 +99,38 @@ export class ChangeApplier {
       }
       const row = ctx.manager.create(handler.target, { id: change.id, version: 0, deletedAt: null });
       await handler.assign(ctx, row, data.value, { caseId, isNew: true });
-      return this.write(ctx.manager, handler, row, counter, change.changeId);
+      return this.write(ctx, handler, row, counter, change.changeId, { caseId, action: 'create', before: null });
     }
     if (change.baseVersion !== existing.version) return conflict(existing);
     if (existing.deletedAt) throw new ChangeRejected(`This ${change.entity} was deleted on the server; it cannot be changed`);
     if (handler.appendOnly) throw new ChangeRejected(`A ${change.entity} is a permanent record: it cannot be changed once sent`);
+    const before = structuredClone(handler.toData(existing));
     await handler.assign(ctx, existing, data.value, { caseId, isNew: false });
-    return this.write(ctx.manager, handler, existing, counter, change.changeId);
+    return this.write(ctx, handler, existing, counter, change.changeId, { caseId, action: 'update', before });
   }
 
-  /** Bumps the version, takes the next sequence number and saves. */
+  /** Bumps the version, takes the next sequence number, saves and records the change in the audit trail. */
   private async write(
-    manager: EntityManager,
+    ctx: ChangeContext,
     handler: SyncHandler,
     row: SyncedRecord,
     counter: SyncCounter,
     changeId: string,
+    audit: { caseId: string; action: 'create' | 'update' | 'delete'; before: Record<string, unknown> | null },
   ): Promise<ChangeResultDto> {
     row.version += 1;
-    row.syncSeq = await takeSyncSeq(manager, counter);
-    await manager.save(handler.target, row);
+    row.syncSeq = await takeSyncSeq(ctx.manager, counter);
+    await ctx.manager.save(handler.target, row);
+    await this.audit.record(ctx.manager, {
+      actorId: ctx.user.id,
+      actorRole: ctx.user.role,
+      entity: handler.entity,
+      entityId: row.id,
+      caseId: audit.caseId,
+      action: audit.action,
+      before: audit.before,
+      after: audit.action === 'delete' ? null : handler.toData(row),
+    });
     return { changeId, status: 'applied', version: row.version };
   }
 }
