@@ -132,6 +132,33 @@ describe('Audit trail (e2e, MariaDB)', () => {
     });
   });
 
+  describe('recording user changes', () => {
+    it("records an admin's create, role change and deactivation, never the password", async () => {
+      const adminId = (await signIn(t, DEMO.admin)).user.id;
+      const created = await t
+        .http()
+        .post('/api/users')
+        .set('Authorization', `Bearer ${admin}`)
+        .send({ email: 'audited.person@demo.test', displayName: 'Audited Person', role: 'inspector', password: 'audited-person-pw' })
+        .expect(201);
+      const id = created.body.id as string;
+      await t.http().patch(`/api/users/${id}`).set('Authorization', `Bearer ${admin}`).send({ role: 'supervisor' }).expect(200);
+      await t.http().patch(`/api/users/${id}`).set('Authorization', `Bearer ${admin}`).send({ active: false }).expect(200);
+      // A refused change (an admin demoting themselves) writes nothing.
+      await t.http().patch(`/api/users/${adminId}`).set('Authorization', `Bearer ${admin}`).send({ role: 'inspector' }).expect(409);
+
+      const { items } = await entries({ entity: 'user', entityId: id });
+      const person = { email: 'audited.person@demo.test', displayName: 'Audited Person' };
+      expect(items.map(({ action, before, after, actorId, actorRole, caseId }) => ({ action, before, after, actorId, actorRole, caseId }))).toEqual([
+        { action: 'update', before: { ...person, role: 'supervisor', active: true }, after: { ...person, role: 'supervisor', active: false }, actorId: adminId, actorRole: 'admin', caseId: null },
+        { action: 'update', before: { ...person, role: 'inspector', active: true }, after: { ...person, role: 'supervisor', active: true }, actorId: adminId, actorRole: 'admin', caseId: null },
+        { action: 'create', before: null, after: { ...person, role: 'inspector', active: true }, actorId: adminId, actorRole: 'admin', caseId: null },
+      ]);
+      expect(JSON.stringify(items)).not.toMatch(/password/i);
+      expect((await entries({ entity: 'user', entityId: adminId })).total).toBe(0);
+    });
+  });
+
   describe('GET /api/audit', () => {
     it('filters by entity and pages newest first', async () => {
       const all = await entries({ entity: 'case', pageSize: 2 });

@@ -40,8 +40,8 @@ export class UsersController {
   @ApiOperation({ summary: 'Add a user' })
   @ApiCreatedResponse({ type: UserDto })
   @ApiConflictResponse({ type: ErrorResponseDto, description: 'The email is taken' })
-  async create(@Body() dto: CreateUserDto): Promise<UserDto> {
-    return UserDto.fromEntity(await this.users.create(dto));
+  async create(@Body() dto: CreateUserDto, @CurrentUser() actingUser: AuthenticatedUser): Promise<UserDto> {
+    return UserDto.fromEntity(await this.users.create(dto, actingUser));
   }
 
   @Patch(':id')
@@ -54,6 +54,6 @@ export class UsersController {
     @Body() dto: UpdateUserDto,
     @CurrentUser() actingUser: AuthenticatedUser,
   ): Promise<UserDto> {
-    return UserDto.fromEntity(await this.users.update(id, dto, actingUser.id));
+    return UserDto.fromEntity(await this.users.update(id, dto, actingUser));
   }
 }

@@ -1,6 +1,8 @@
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { QueryFailedError, type Repository } from 'typeorm';
+import { DataSource, QueryFailedError, type Repository } from 'typeorm';
+import { AuditService } from '../audit/audit.service';
+import type { AuthenticatedUser } from '../auth/authenticated-user';
 import type { CreateUserDto } from './dto/create-user.dto';
 import type { UpdateUserDto } from './dto/update-user.dto';
 import { normalizeEmail } from './email';
@@ -13,6 +15,8 @@ export class UsersService {
   constructor(
     @InjectRepository(User) private readonly users: Repository<User>,
     private readonly passwords: PasswordService,
+    private readonly dataSource: DataSource,
+    private readonly audit: AuditService,
   ) {}
 
   /** The user with this id, or null. */
@@ -30,8 +34,8 @@ export class UsersService {
     return this.users.find({ order: { displayName: 'ASC', email: 'ASC' } });
   }
 
-  /** Adds a user; 409 when the email is taken. */
-  async create(dto: CreateUserDto): Promise<User> {
+  /** Adds a user (audited); 409 when the email is taken. */
+  async create(dto: CreateUserDto, actingUser: AuthenticatedUser): Promise<User> {
     const email = normalizeEmail(dto.email);
     if (await this.users.existsBy({ email })) throw emailTaken();
     const user = this.users.create({
@@ -42,7 +46,11 @@ export class UsersService {
       active: true,
     });
     try {
-      return await this.users.save(user);
+      return await this.dataSource.transaction(async (manager) => {
+        const saved = await manager.save(user);
+        await this.audit.record(manager, auditOf(actingUser, saved, 'create', null));
+        return saved;
+      });
     } catch (error) {
       // Two requests for the same email at once: the unique index decides.
       if (isDuplicateKey(error)) throw emailTaken();
@@ -54,17 +62,31 @@ export class UsersService {
    * Changes a user's name, role or active flag. An administrator cannot deactivate themselves or take
    * away their own admin role, so the last administrator cannot lock everyone out by accident.
    */
-  async update(id: string, dto: UpdateUserDto, actingUserId: string): Promise<User> {
+  async update(id: string, dto: UpdateUserDto, actingUser: AuthenticatedUser): Promise<User> {
     const user = await this.findById(id);
     if (!user) throw new NotFoundException(`No user has the id ${id}`);
-    if (id === actingUserId && (dto.active === false || (dto.role !== undefined && dto.role !== 'admin'))) {
+    if (id === actingUser.id && (dto.active === false || (dto.role !== undefined && dto.role !== 'admin'))) {
       throw new ConflictException('You cannot deactivate your own account or remove your own admin role');
     }
+    const before = auditedFields(user);
     if (dto.displayName !== undefined) user.displayName = dto.displayName;
     if (dto.role !== undefined) user.role = dto.role;
     if (dto.active !== undefined) user.active = dto.active;
-    return this.users.save(user);
+    return this.dataSource.transaction(async (manager) => {
+      const saved = await manager.save(user);
+      await this.audit.record(manager, auditOf(actingUser, saved, 'update', before));
+      return saved;
+    });
   }
+}
+
+/** What the audit trail keeps of a user (never the password hash). */
+function auditedFields(user: User): Record<string, unknown> {
+  return { email: user.email, displayName: user.displayName, role: user.role, active: user.active };
+}
+
+function auditOf(actingUser: AuthenticatedUser, user: User, action: 'create' | 'update', before: Record<string, unknown> | null) {
+  return { actorId: actingUser.id, actorRole: actingUser.role, entity: 'user', entityId: user.id, action, before, after: auditedFields(user) };
 }
 
 function emailTaken(): ConflictException {
