@@ -10,6 +10,7 @@ import { buildDataSourceOptions } from './database/data-source-options';
 import { HealthModule } from './health/health.module';
 import { IdentifyModule } from './identify/identify.module';
 import { LibraryModule } from './library/library.module';
+import { ReviewModule } from './review/review.module';
 import { SymmetryModule } from './symmetry/symmetry.module';
 import { SyncModule } from './sync/sync.module';
 import { UsersModule } from './users/users.module';
@@ -37,6 +38,7 @@ import { UsersModule } from './users/users.module';
     IdentifyModule,
     SymmetryModule,
     AuditModule,
+    ReviewModule,
   ],
 })
 export class AppModule {}

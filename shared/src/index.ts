@@ -12,3 +12,4 @@ export * from './chem/index.js';
 export * from './contours/index.js';
 export * from './symmetry/detect/index.js';
 export * from './case-archive/index.js';
+export * from './table/index.js';

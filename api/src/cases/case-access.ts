@@ -10,8 +10,14 @@ import { Case } from './case.entity';
  */
 export const CASE_READER_ROLES = ['inspector', 'supervisor', 'safety_officer'] as const satisfies readonly Role[];
 
-/** Only inspectors change cases (and everything below them) for now; review writes come later. */
+/** Only inspectors change cases (and everything below them) through sync. */
 export const CASE_WRITER_ROLES = ['inspector'] as const satisfies readonly Role[];
+
+/** Supervisors decide in the review (decisions, return, sign-off, reopen). */
+export const REVIEWER_ROLES = ['supervisor'] as const satisfies readonly Role[];
+
+/** The review queue is read by supervisors, and by safety officers following dangerous findings. */
+export const QUEUE_READER_ROLES = ['supervisor', 'safety_officer'] as const satisfies readonly Role[];
 
 /** True when the user sees every case, not just their own. */
 export function readsAllCases(user: AuthenticatedUser): boolean {

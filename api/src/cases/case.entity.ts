@@ -50,4 +50,8 @@ export class Case extends SyncedRecord {
 
   @Column({ type: 'enum', enum: CASE_STATUSES, default: 'open' })
   status: CaseStatus;
+
+  /** When the inspector last submitted the case (set by the server); null while it never was. */
+  @Column({ type: 'datetime', precision: 3, nullable: true })
+  submittedAt: Date | null;
 }

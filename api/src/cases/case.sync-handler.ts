@@ -3,7 +3,11 @@ import { assertOwnCase } from './case-access';
 import { Case } from './case.entity';
 import { CaseDataDto } from './dto/case-data.dto';
 
-/** Cases through sync: created by the pushing inspector, who alone changes them while open or submitted. */
+/**
+ * Cases through sync: created by the pushing inspector, who alone changes them while open or submitted,
+ * and reopens them (status `open`) after a supervisor returned them. Cases in review or accepted are the
+ * supervisors' (the review routes); an accepted case is frozen until a supervisor reopens it.
+ */
 export const caseSyncHandler: SyncHandler<Case, CaseDataDto> = {
   entity: 'case',
   target: Case,
@@ -11,10 +15,16 @@ export const caseSyncHandler: SyncHandler<Case, CaseDataDto> = {
   caseColumn: 'id',
   appendOnly: false,
 
-  async authorize(ctx, id, _data, existing) {
+  async authorize(ctx, id, data, existing) {
     if (existing) {
       assertOwnCase(existing, ctx.user);
-      if (existing.status !== 'open' && existing.status !== 'submitted') {
+      if (existing.status === 'returned') {
+        if (data?.status !== 'open') {
+          throw new ChangeRejected(`Case ${id} was returned by a supervisor: reopen it (status open) to fix it, then submit it again`);
+        }
+      } else if (existing.status === 'accepted') {
+        throw new ChangeRejected(`Case ${id} is accepted and frozen: only a supervisor can reopen it`);
+      } else if (existing.status !== 'open' && existing.status !== 'submitted') {
         throw new ChangeRejected(`Case ${id} is ${existing.status}: it is with the supervisors and cannot be changed from the tablet`);
       }
     } else if (ctx.user.role !== 'inspector') {
@@ -34,6 +44,7 @@ export const caseSyncHandler: SyncHandler<Case, CaseDataDto> = {
     row.startedAt = new Date(data.startedAt);
     row.weatherNotes = data.weatherNotes ?? null;
     row.accessNotes = data.accessNotes ?? null;
+    if (data.status === 'submitted' && row.status !== 'submitted') row.submittedAt = new Date();
     row.status = data.status;
   },
 

@@ -78,4 +78,15 @@ export class Scan extends SyncedRecord {
   /** Why the last recomputation failed (unreadable file, storage down...); null when it ran or has not run yet. */
   @Column({ type: 'varchar', length: 1000, nullable: true })
   serverRecomputeError: string | null;
+
+  /** The first likely compound of the tablet's `result` (set by the server on each push), for the review queue. */
+  @Column({ type: 'varchar', length: 64, nullable: true })
+  likelyCompoundId: string | null;
+
+  @Column({ type: 'varchar', length: 200, nullable: true })
+  likelyCompoundName: string | null;
+
+  /** The shared hazard rank (0–3) of the tablet's `result`, for the review queue. */
+  @Column({ type: 'tinyint', default: 0 })
+  hazardRank: number;
 }

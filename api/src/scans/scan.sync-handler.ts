@@ -5,6 +5,7 @@ import { ChangeRejected, type ChangeContext, type SyncHandler } from '../sync/sy
 import { ScanDataDto } from './dto/scan-data.dto';
 import { InstrumentCheck } from './instrument-check.entity';
 import { Scan } from './scan.entity';
+import { scanFinding } from './scan-finding';
 
 /** Scans through sync: linked to a sample, an instrument check of the same case, and a raw-scan attachment. */
 export const scanSyncHandler: SyncHandler<Scan, ScanDataDto> = {
@@ -39,6 +40,7 @@ export const scanSyncHandler: SyncHandler<Scan, ScanDataDto> = {
     row.rawSha256 = data.rawSha256 ?? null;
     row.parsedSummary = data.parsedSummary ?? null;
     row.result = data.result ?? null;
+    Object.assign(row, scanFinding(row.result));
     row.inspectorAcknowledgedAt = data.inspectorAcknowledgedAt ? new Date(data.inspectorAcknowledgedAt) : null;
     // An earlier recomputation stands only while what it was computed from is unchanged (an
     // acknowledgement alone keeps it); otherwise it is cleared and the sync service queues a new one.

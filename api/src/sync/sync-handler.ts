@@ -2,8 +2,8 @@ import type { EntityManager } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user';
 import type { SyncedRecord } from './synced-record';
 
-/** The kinds of record a client can push and pull. */
-export const SYNC_ENTITIES = ['case', 'sample', 'handover', 'scan', 'note', 'instrumentCheck', 'escalation', 'attachment'] as const;
+/** The kinds of record a client can pull; all but `decision` (written by the review routes) can be pushed too. */
+export const SYNC_ENTITIES = ['case', 'sample', 'handover', 'scan', 'note', 'instrumentCheck', 'escalation', 'attachment', 'decision'] as const;
 export type SyncEntityName = (typeof SYNC_ENTITIES)[number];
 
 /** A change the server refuses, with the reason the client shows next to the record. */
@@ -20,18 +20,24 @@ export interface ChangeContext {
   user: AuthenticatedUser;
 }
 
-/**
- * How sync treats one kind of record. The generic part (idempotency, versions, sequence numbers,
- * conflicts) lives in the change applier; a handler only knows its own fields and parent links.
- */
-export interface SyncHandler<E extends SyncedRecord = SyncedRecord, D extends object = object> {
+/** What a pull needs of one kind of record: its table, its case link and its client view. */
+export interface PulledKind<E extends SyncedRecord = SyncedRecord> {
   entity: SyncEntityName;
   /** The TypeORM entity class. */
   target: new () => E;
-  /** The class-validator class for `data` of an upsert (full record, not a patch). */
-  dataClass: new () => D;
   /** The column naming the case a row belongs to, for visibility filters (`id` for cases themselves). */
   caseColumn: 'id' | 'caseId';
+  /** The record's fields as clients see them (no id, version or sync fields: the envelope carries those). */
+  toData(row: E): Record<string, unknown>;
+}
+
+/**
+ * How sync treats one kind of record clients push. The generic part (idempotency, versions, sequence
+ * numbers, conflicts) lives in the change applier; a handler only knows its own fields and parent links.
+ */
+export interface SyncHandler<E extends SyncedRecord = SyncedRecord, D extends object = object> extends PulledKind<E> {
+  /** The class-validator class for `data` of an upsert (full record, not a patch). */
+  dataClass: new () => D;
   /** Created once, never changed or deleted through sync (e.g. hand-overs: the chain of custody is append-only). */
   appendOnly: boolean;
   /**
@@ -44,6 +50,4 @@ export interface SyncHandler<E extends SyncedRecord = SyncedRecord, D extends ob
    * Throws `ChangeRejected` on a forbidden change.
    */
   assign(ctx: ChangeContext, row: E, data: D, target: { caseId: string; isNew: boolean }): void | Promise<void>;
-  /** The record's fields as clients see them (no id, version or sync fields: the envelope carries those). */
-  toData(row: E): Record<string, unknown>;
 }

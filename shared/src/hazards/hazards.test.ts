@@ -5,6 +5,7 @@ import { cautionCard, UNCLASSIFIED_CAUTION } from './caution-card.js';
 import { escalationFor, parseEscalationRules, type EscalationRules } from './escalation.js';
 import { H_STATEMENTS } from './h-statements.js';
 import { HAZARD_CLASSES } from './hazard-classes.js';
+import { hazardRank, hazardRankOf } from './hazard-rank.js';
 
 const library = loadLibrary();
 const byId = (id: string) => library.compounds.find((c) => c.id === id)!;
@@ -74,5 +75,21 @@ describe('escalation rules are data', () => {
     expect(() => parseEscalationRules({ ...base, rules: [] })).toThrow(/rules must be a non-empty list/);
     expect(() => parseEscalationRules({ ...base, rules: [{ id: 'a', reason: 'r', when: [{ hazardClass: 'spooky' }] }] })).toThrow(/"spooky" is not a known hazard class/);
     expect(() => parseEscalationRules({ ...base, minScore: 2, rules: [] })).toThrow(/minScore must be a number in 0\.\.1/);
+  });
+});
+
+describe('hazard rank', () => {
+  it('orders escalation above Danger above Warning above none', () => {
+    expect(hazardRank({ signalWord: null, escalates: false })).toBe(0);
+    expect(hazardRank({ signalWord: 'Warning', escalates: false })).toBe(1);
+    expect(hazardRank({ signalWord: 'Danger', escalates: false })).toBe(2);
+    expect(hazardRank({ signalWord: null, escalates: true })).toBe(3);
+    expect(hazardRank({ signalWord: 'Warning', escalates: true })).toBe(3);
+  });
+
+  it('labels each rank and refuses numbers outside 0..3', () => {
+    expect([0, 1, 2, 3].map((r) => hazardRankOf(r).label)).toEqual(['none', 'warning', 'danger', 'escalation']);
+    expect(() => hazardRankOf(4)).toThrow('A hazard rank is 0 to 3, not 4');
+    expect(() => hazardRankOf(1.5)).toThrow(RangeError);
   });
 });

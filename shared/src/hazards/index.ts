@@ -15,3 +15,4 @@ export {
   type EscalationRules,
   type EscalationTrigger,
 } from './escalation.js';
+export { HAZARD_RANK_LABELS, MAX_HAZARD_RANK, hazardRank, hazardRankOf, type HazardRank, type HazardRankLabel } from './hazard-rank.js';

@@ -2,6 +2,7 @@ import { CreateUsersAndRefreshTokens1796152400000 } from './1796152400000-Create
 import { CreateFieldCaptureAndSync1796238800000 } from './1796238800000-CreateFieldCaptureAndSync';
 import { CreateLibraryEdits1796240000000 } from './1796240000000-CreateLibraryEdits';
 import { AddScanRecomputation1796250000000 } from './1796250000000-AddScanRecomputation';
+import { CreateReviewDecisions1796260000000 } from './1796260000000-CreateReviewDecisions';
 import { CreateAuditLog1796280000000 } from './1796280000000-CreateAuditLog';
 
 /** Every committed migration, oldest first (listed, not globbed, so sources and dist behave the same). */
@@ -10,5 +11,6 @@ export const MIGRATIONS = [
   CreateFieldCaptureAndSync1796238800000,
   CreateLibraryEdits1796240000000,
   AddScanRecomputation1796250000000,
+  CreateReviewDecisions1796260000000,
   CreateAuditLog1796280000000,
 ];

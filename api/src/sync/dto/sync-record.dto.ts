@@ -1,5 +1,5 @@
 import { ApiProperty } from '@nestjs/swagger';
-import { SYNC_ENTITIES, type SyncEntityName, type SyncHandler } from '../sync-handler';
+import { SYNC_ENTITIES, type PulledKind, type SyncEntityName } from '../sync-handler';
 import type { SyncedRecord } from '../synced-record';
 
 /** One record as the server holds it: in pulls, and as `server` in a conflict. */
@@ -29,7 +29,7 @@ export class SyncRecordDto {
   data: Record<string, unknown>;
 
   /** The client view of a row, through its handler. */
-  static of(handler: SyncHandler, row: SyncedRecord): SyncRecordDto {
+  static of(handler: PulledKind, row: SyncedRecord): SyncRecordDto {
     return Object.assign(new SyncRecordDto(), {
       entity: handler.entity,
       id: row.id,

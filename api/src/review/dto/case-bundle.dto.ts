@@ -1,0 +1,33 @@
+import { ApiProperty } from '@nestjs/swagger';
+import type { FlatRecord } from '../../cases/dto/case-list.dto';
+import { DecisionDto } from './decision.dto';
+
+/** Everything of a case for its review page. */
+export class CaseBundleDto {
+  @ApiProperty({ type: Object })
+  case: FlatRecord;
+
+  @ApiProperty({ type: Object, isArray: true, description: 'Samples, each with its hand-overs (chain of custody) as `handovers`' })
+  samples: FlatRecord[];
+
+  @ApiProperty({ type: Object, isArray: true })
+  instrumentChecks: FlatRecord[];
+
+  @ApiProperty({ type: Object, isArray: true, description: 'Scans with result, serverResult, resultMismatch, mismatch and rawAttachmentId' })
+  scans: FlatRecord[];
+
+  @ApiProperty({ type: Object, isArray: true })
+  notes: FlatRecord[];
+
+  @ApiProperty({ type: Object, isArray: true })
+  escalations: FlatRecord[];
+
+  @ApiProperty({ type: Object, isArray: true, description: 'Attachment metadata (bytes through /api/attachments/:id/content)' })
+  attachments: FlatRecord[];
+
+  @ApiProperty({ type: DecisionDto, isArray: true, description: 'Every decision, oldest revision first' })
+  decisions: DecisionDto[];
+
+  @ApiProperty({ type: Object, description: 'The current decision of each decided scan, by scan id (its highest revision)' })
+  currentDecisions: Record<string, DecisionDto>;
+}

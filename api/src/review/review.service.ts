@@ -1,0 +1,156 @@
+import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { randomUUID } from 'node:crypto';
+import { DataSource, IsNull, type EntityManager } from 'typeorm';
+import type { AuthenticatedUser } from '../auth/authenticated-user';
+import { Case, type CaseStatus } from '../cases/case.entity';
+import { CasesService } from '../cases/cases.service';
+import type { FlatRecord } from '../cases/dto/case-list.dto';
+import { LibraryService } from '../library/library.service';
+import { Scan } from '../scans/scan.entity';
+import { lockSyncCounter, takeSyncSeq } from '../sync/sync-sequence';
+import type { DecisionRequestDto } from './dto/decision-request.dto';
+import type { DecisionDto, DecisionResultDto } from './dto/decision.dto';
+import type { CaseBundleDto } from './dto/case-bundle.dto';
+import { isScanDecision, ReviewDecision, type DecisionKind } from './review-decision.entity';
+import { decisionPull } from './review-decision.pull';
+
+/**
+ * The statuses each decision applies to and the status it leaves the case in. The first decision on a
+ * submitted case puts it in review; `return` sends it back, `sign_off` accepts it, `reopen` takes an
+ * accepted case back into review.
+ */
+const TRANSITIONS: Record<DecisionKind, { from: readonly CaseStatus[]; to: CaseStatus }> = {
+  accept: { from: ['submitted', 'in_review'], to: 'in_review' },
+  replace: { from: ['submitted', 'in_review'], to: 'in_review' },
+  needs_lab: { from: ['submitted', 'in_review'], to: 'in_review' },
+  return: { from: ['submitted', 'in_review'], to: 'returned' },
+  sign_off: { from: ['submitted', 'in_review'], to: 'accepted' },
+  reopen: { from: ['accepted'], to: 'in_review' },
+};
+
+/** The supervisor's decisions on cases, and everything of a case on one page. */
+@Injectable()
+export class ReviewService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly cases: CasesService,
+    private readonly library: LibraryService,
+  ) {}
+
+  /**
+   * Appends one decision and moves the case on, in one transaction: the sync counter is locked first (as
+   * every synced write does), so decisions and tablet pushes serialise and the case's version is checked
+   * against the latest write.
+   */
+  async decide(caseId: string, body: DecisionRequestDto, user: AuthenticatedUser): Promise<DecisionResultDto> {
+    refuseFieldsNotFor(body);
+    const replacement = body.kind === 'replace' ? await this.libraryCompound(body.compoundId as string) : null;
+    return this.dataSource.transaction(async (manager) => {
+      const counter = await lockSyncCounter(manager);
+      const row = await manager.findOneBy(Case, { id: caseId, deletedAt: IsNull() });
+      if (!row) throw new NotFoundException(`No case with the id ${caseId}`);
+      if (row.version !== body.baseVersion) {
+        throw new ConflictException(`Case ${caseId} is at version ${row.version}, not ${body.baseVersion}: someone changed it since you looked; reload it and decide again`);
+      }
+      const transition = TRANSITIONS[body.kind];
+      if (!transition.from.includes(row.status)) {
+        throw new ConflictException(`Case ${caseId} is ${row.status}: ${body.kind} needs a case that is ${transition.from.join(' or ')}`);
+      }
+
+      let compound: { id: string; name: string } | null = replacement;
+      if (isScanDecision(body.kind)) {
+        const scan = await manager.findOneBy(Scan, { id: body.scanId as string, caseId, deletedAt: IsNull() });
+        if (!scan) throw new NotFoundException(`No scan ${body.scanId} in case ${caseId}`);
+        if (body.kind === 'accept') {
+          if (!scan.likelyCompoundId) {
+            throw new ConflictException(`Scan ${scan.id} has no likely compound to accept: replace it with a library compound or mark it needs_lab`);
+          }
+          compound = { id: scan.likelyCompoundId, name: scan.likelyCompoundName ?? scan.likelyCompoundId };
+        }
+      }
+      if (body.kind === 'sign_off') await assertEveryScanDecided(manager, caseId);
+
+      const last = await manager
+        .createQueryBuilder(ReviewDecision, 'd')
+        .select('MAX(d.revision)', 'revision')
+        .where('d.caseId = :caseId', { caseId })
+        .getRawOne<{ revision: number | null }>();
+      const decision = manager.create(ReviewDecision, {
+        id: randomUUID(),
+        version: 1,
+        syncSeq: await takeSyncSeq(manager, counter),
+        deletedAt: null,
+        caseId,
+        scanId: body.scanId ?? null,
+        kind: body.kind,
+        compoundId: compound?.id ?? null,
+        compoundName: compound?.name ?? null,
+        reason: body.reason ?? null,
+        comment: body.comment ?? null,
+        revision: Number(last?.revision ?? 0) + 1,
+        decidedBy: user.id,
+        decidedByName: user.displayName,
+        decidedAt: new Date(),
+      });
+      await manager.save(ReviewDecision, decision);
+
+      // Every decision is a new version of the case (so a second supervisor working from the same view
+      // gets 409) and a new sync sequence number (so tablets pull the new status).
+      row.status = transition.to;
+      row.version += 1;
+      row.syncSeq = await takeSyncSeq(manager, counter);
+      await manager.save(Case, row);
+      return { decision: decisionDto(decision), case: { id: row.id, status: row.status, version: row.version } };
+    });
+  }
+
+  /** The case with samples (and their hand-overs), scans, notes, attachments, escalations and every decision. */
+  async bundle(caseId: string, user: AuthenticatedUser): Promise<CaseBundleDto> {
+    const detail = await this.cases.detail(caseId, user);
+    const decisions = (await this.dataSource.getRepository(ReviewDecision).find({ where: { caseId }, order: { revision: 'ASC' } })).map(decisionDto);
+    const current: Record<string, DecisionDto> = {};
+    for (const decision of decisions) if (decision.scanId) current[decision.scanId] = decision;
+    const { handovers, ...rest } = detail;
+    return {
+      ...rest,
+      samples: detail.samples.map((sample) => ({ ...sample, handovers: handovers.filter((handover: FlatRecord) => handover.sampleId === sample.id) })),
+      decisions,
+      currentDecisions: current,
+    };
+  }
+
+  /** A compound of the library in force that a scan's identification can be replaced with. */
+  private async libraryCompound(id: string): Promise<{ id: string; name: string }> {
+    const { library } = await this.library.current();
+    const compound = library.compounds.find((candidate) => candidate.id === id);
+    if (!compound) throw new BadRequestException(`compoundId ${id} is not a compound of the library in force`);
+    return { id: compound.id, name: compound.name };
+  }
+}
+
+/** Fields a kind of decision does not take are refused rather than silently dropped. */
+function refuseFieldsNotFor(body: DecisionRequestDto): void {
+  const refused: string[] = [];
+  if (!isScanDecision(body.kind) && body.scanId !== undefined) refused.push('scanId (only for accept, replace and needs_lab)');
+  if (body.kind !== 'replace' && body.compoundId !== undefined) refused.push('compoundId (only for replace)');
+  if (body.reason !== undefined && body.kind !== 'replace' && body.kind !== 'reopen') refused.push('reason (only for replace and reopen)');
+  if (refused.length > 0) throw new BadRequestException(`A ${body.kind} decision does not take ${refused.join(', ')}`);
+}
+
+/** Sign-off needs a current decision on every live scan of the case. */
+async function assertEveryScanDecided(manager: EntityManager, caseId: string): Promise<void> {
+  const undecided = await manager
+    .createQueryBuilder(Scan, 's')
+    .select('s.id', 'id')
+    .where('s.caseId = :caseId AND s.deletedAt IS NULL', { caseId })
+    .andWhere('NOT EXISTS (SELECT 1 FROM review_decisions d WHERE d.scanId = s.id)')
+    .orderBy('s.recordedAt', 'ASC')
+    .getRawMany<{ id: string }>();
+  if (undecided.length > 0) {
+    throw new ConflictException(`Every scan needs a decision before sign-off; still undecided: ${undecided.map((scan) => scan.id).join(', ')}`);
+  }
+}
+
+function decisionDto(row: ReviewDecision): DecisionDto {
+  return { id: row.id, ...(decisionPull.toData(row) as Omit<DecisionDto, 'id'>) };
+}

@@ -1,0 +1,2 @@
+/** Tables written out for other programs. */
+export { toCsv, type CsvCell } from './csv.js';
