@@ -162,6 +162,15 @@ describe('Review: decisions, the queue, its CSV and the case bundle (e2e)', () =
       expect(bundle.body.scans[0]).toEqual(expect.objectContaining({ result: expect.any(Object), serverResult: null, mismatch: null, rawAttachmentId: null }));
       expect(bundle.body.notes).toHaveLength(1);
       expect(bundle.body).not.toHaveProperty('handovers');
+
+      // Every decision and status change is in the audit trail, the supervisor's reopen included.
+      const audit = await t.http().get('/api/audit').query({ caseId: made.caseId, pageSize: 100 }).set(auth(tokens.admin)).expect(200);
+      const entries = (audit.body.items as { entity: string; action: string; actorRole: string; before: Record<string, unknown> | null; after: Record<string, unknown> | null }[]).reverse();
+      const byReview = entries.filter((entry) => entry.actorRole === 'supervisor');
+      expect(byReview.filter((entry) => entry.entity === 'decision').map((entry) => entry.after?.kind)).toEqual(['accept', 'replace', 'return', 'sign_off', 'reopen', 'needs_lab']);
+      const statusMoves = byReview.filter((entry) => entry.entity === 'case').map((entry) => `${entry.before?.status}→${entry.after?.status}`);
+      expect(statusMoves).toEqual(['submitted→in_review', 'in_review→in_review', 'in_review→returned', 'submitted→accepted', 'accepted→in_review', 'in_review→in_review']);
+      expect((await t.http().get('/api/audit/verify').set(auth(tokens.admin)).expect(200)).body.ok).toBe(true);
     });
 
     it('needs every scan decided before sign-off, and a likely compound to accept', async () => {

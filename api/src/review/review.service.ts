@@ -1,8 +1,10 @@
 import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { randomUUID } from 'node:crypto';
 import { DataSource, IsNull, type EntityManager } from 'typeorm';
+import { AuditService } from '../audit/audit.service';
 import type { AuthenticatedUser } from '../auth/authenticated-user';
 import { Case, type CaseStatus } from '../cases/case.entity';
+import { caseSyncHandler } from '../cases/case.sync-handler';
 import { CasesService } from '../cases/cases.service';
 import type { FlatRecord } from '../cases/dto/case-list.dto';
 import { LibraryService } from '../library/library.service';
@@ -35,12 +37,13 @@ export class ReviewService {
     private readonly dataSource: DataSource,
     private readonly cases: CasesService,
     private readonly library: LibraryService,
+    private readonly audit: AuditService,
   ) {}
 
   /**
-   * Appends one decision and moves the case on, in one transaction: the sync counter is locked first (as
-   * every synced write does), so decisions and tablet pushes serialise and the case's version is checked
-   * against the latest write.
+   * Appends one decision and moves the case on, in one transaction with their audit entries: the sync
+   * counter is locked first (as every synced write does, before the audit chain head), so decisions and
+   * tablet pushes serialise and the case's version is checked against the latest write.
    */
   async decide(caseId: string, body: DecisionRequestDto, user: AuthenticatedUser): Promise<DecisionResultDto> {
     refuseFieldsNotFor(body);
@@ -93,13 +96,17 @@ export class ReviewService {
         decidedAt: new Date(),
       });
       await manager.save(ReviewDecision, decision);
+      const actor = { actorId: user.id, actorRole: user.role, caseId };
+      await this.audit.record(manager, { ...actor, entity: 'decision', entityId: decision.id, action: 'create', before: null, after: decisionPull.toData(decision) });
 
+      const before = structuredClone(caseSyncHandler.toData(row));
       // Every decision is a new version of the case (so a second supervisor working from the same view
       // gets 409) and a new sync sequence number (so tablets pull the new status).
       row.status = transition.to;
       row.version += 1;
       row.syncSeq = await takeSyncSeq(manager, counter);
       await manager.save(Case, row);
+      await this.audit.record(manager, { ...actor, entity: 'case', entityId: row.id, action: 'update', before, after: caseSyncHandler.toData(row) });
       return { decision: decisionDto(decision), case: { id: row.id, status: row.status, version: row.version } };
     });
   }
