@@ -13,6 +13,8 @@ import type { ScanRow } from './scansTable';
 import type { EscalationRow } from './escalationsTable';
 import type { CaseCheckRow } from './caseChecksTable';
 import { syncMetaSchema, type SyncMetaRow } from './syncMetaTable';
+import { decisionsSchema, type DecisionRow } from './decisionsTable';
+import { escalationNotesSchema, type EscalationNoteRow } from './escalationNotesTable';
 
 /** Siteband's on-device database; each later version bump adds its own upgrade step here. */
 export class SitebandDb extends Dexie {
@@ -29,6 +31,8 @@ export class SitebandDb extends Dexie {
   scans!: EntityTable<ScanRow, 'id'>;
   escalations!: EntityTable<EscalationRow, 'id'>;
   caseChecks!: EntityTable<CaseCheckRow, 'id'>;
+  decisions!: EntityTable<DecisionRow, 'id'>;
+  escalationNotes!: EntityTable<EscalationNoteRow, 'id'>;
 
   constructor(name = 'siteband') {
     super(name);
@@ -59,6 +63,12 @@ export class SitebandDb extends Dexie {
     // cursor past them, so the cursor starts over: already-known records merge as unchanged.
     this.version(5)
       .stores({ scans: captureRowSchema, escalations: captureRowSchema, caseChecks: captureRowSchema })
+      .upgrade((tx) => tx.table('syncMeta').delete('pullCursor'));
+    // Version 7: what reviewers and safety officers write on the server: review decisions and escalation
+    // notes (pulled only). Earlier pulls skipped them, and escalations were stored without their server
+    // fields, so the cursor starts over: known records merge as unchanged and gain those fields.
+    this.version(7)
+      .stores({ decisions: decisionsSchema, escalationNotes: escalationNotesSchema })
       .upgrade((tx) => tx.table('syncMeta').delete('pullCursor'));
   }
 }

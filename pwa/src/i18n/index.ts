@@ -5,6 +5,8 @@ import identify from './en/identify.json';
 import library from './en/library.json';
 import capture from './en/capture.json';
 import events from './en/events.json';
+import escalations from './en/escalations.json';
+import caseOutcome from './en/case-outcome.json';
 
 /** Languages with a complete resource file; English is the source language. */
 export const SUPPORTED_LANGUAGES = ['en'] as const;
@@ -20,7 +22,7 @@ function storedLanguage(): Language {
 /** Starts i18next with every bundled resource (no network loading: the app must work offline). */
 export async function initI18n(): Promise<typeof i18next> {
   await i18next.use(initReactI18next).init({
-    resources: { en: { translation: { ...en, identify, library, capture, events } } },
+    resources: { en: { translation: { ...en, identify, library, capture, events, escalations, caseOutcome } } },
     lng: storedLanguage(),
     fallbackLng: 'en',
     interpolation: { escapeValue: false },

@@ -11,7 +11,10 @@ import { CautionNote } from '../components/CautionNote';
 import { PageShell } from '../components/PageShell';
 import { captureDb } from '../features/cases/captureDb';
 import { casePaths } from '../features/cases/casePaths';
-import { caseIsOpen, saveCase } from '../features/cases/saveCase';
+import { caseIsOpen, inspectorNextStatus, saveCase } from '../features/cases/saveCase';
+import { useCaseOutcome } from '../features/cases/useCaseOutcome';
+import { CaseEscalationsPanel } from '../components/cases/CaseEscalationsPanel';
+import { CaseReviewPanel } from '../components/cases/CaseReviewPanel';
 import { useCase } from '../features/cases/useCases';
 
 /** One case: the visit, its samples, site notes, conflicts, sync, and submit or reopen. */
@@ -19,6 +22,7 @@ export default function CasePage() {
   const { t } = useTranslation();
   const { id = '' } = useParams();
   const row = useCase(id);
+  const outcome = useCaseOutcome(id);
   const title = row ? row.data.siteName : t('capture.case.title');
   if (row === undefined) return <PageShell title={t('capture.case.title')}>{null}</PageShell>;
   if (row === null) {
@@ -31,7 +35,8 @@ export default function CasePage() {
     );
   }
   const open = caseIsOpen(row.data);
-  const inspectorMaySet = row.data.status === 'open' || row.data.status === 'submitted';
+  const next = inspectorNextStatus(row.data.status);
+  const nextLabel = next === 'submitted' ? t('capture.case.submit') : row.data.status === 'returned' ? t('caseOutcome.reopenToFix') : t('capture.case.reopen');
 
   return (
     <PageShell title={title}>
@@ -54,19 +59,21 @@ export default function CasePage() {
               {t('capture.case.edit')}
             </IonButton>
           )}
-          {inspectorMaySet && (
+          {next && (
             <IonButton
               className={open ? 'sb-primary' : undefined}
               fill={open ? 'solid' : 'outline'}
               data-testid="case-submit-toggle"
-              onClick={() => void saveCase(captureDb(), id, { ...row.data, status: open ? 'submitted' : 'open' })}
+              onClick={() => void saveCase(captureDb(), id, { ...row.data, status: next })}
             >
-              {open ? t('capture.case.submit') : t('capture.case.reopen')}
+              {nextLabel}
             </IonButton>
           )}
         </div>
-        {!open && <p className="sb-muted">{t('capture.case.frozen')}</p>}
+        {row.data.status === 'submitted' && <p className="sb-muted">{t('capture.case.frozen')}</p>}
       </section>
+      {outcome && <CaseReviewPanel row={row} outcome={outcome} />}
+      {outcome && <CaseEscalationsPanel outcome={outcome} />}
       <section className="sb-panel" aria-labelledby="samples-heading">
         <h2 id="samples-heading" className="sb-panel__heading">
           {t('capture.sample.listHeading')}

@@ -20,6 +20,16 @@ export async function saveCase(db: SitebandDb, id: string, data: CaseData): Prom
   await recordUpsert(db, { entity: 'case', id, caseId: id, data });
 }
 
+/**
+ * The status the inspector may move a case to from this one: submit an open case, take a submitted
+ * one back, reopen a returned one to fix it. In review and accepted cases are the supervisor's.
+ */
+export function inspectorNextStatus(status: CaseData['status']): 'open' | 'submitted' | null {
+  if (status === 'open') return 'submitted';
+  if (status === 'submitted' || status === 'returned') return 'open';
+  return null;
+}
+
 /** Only open cases take new records (the server freezes a submitted case). */
 export function caseIsOpen(data: Pick<CaseData, 'status'>): boolean {
   return data.status === 'open';

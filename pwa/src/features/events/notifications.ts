@@ -1,4 +1,5 @@
 import type { Role } from '@siteband/shared';
+import { escalationPaths } from '../escalations/escalationPaths';
 import type { LiveEvent } from './liveEvent';
 
 /** What a live event tells a person of this role through the browser's notifications, if anything. */
@@ -16,7 +17,7 @@ export interface LiveNotification {
  */
 export function notificationFor(role: Role, event: LiveEvent): LiveNotification | undefined {
   if (role === 'safety_officer' && event.type === 'escalation.raised') {
-    return { titleKey: 'events.notify.escalationTitle', bodyKey: 'events.notify.escalationBody', path: `/tabs/escalations/${encodeURIComponent(event.id)}` };
+    return { titleKey: 'events.notify.escalationTitle', bodyKey: 'events.notify.escalationBody', path: escalationPaths.escalation(event.id) };
   }
   if (role === 'supervisor' && event.type === 'case.submitted') {
     return { titleKey: 'events.notify.submittedTitle', bodyKey: 'events.notify.submittedBody', path: `/tabs/review/cases/${encodeURIComponent(event.caseId ?? event.id)}` };

@@ -1,5 +1,6 @@
 import type { SitebandDb } from '../../db/db';
 import { captureScope } from './captureTables';
+import { serverWrittenTables } from './serverWritten';
 import { everythingSynced } from './syncState';
 
 /** Refusal to sign out while records wait for the server. */
@@ -16,8 +17,9 @@ export class UnsyncedWorkError extends Error {
  * one transaction, so an edit made in between cannot be lost.
  */
 export async function clearCaptureDataIfSynced(db: SitebandDb): Promise<void> {
-  await db.transaction('rw', [...captureScope(db), db.syncMeta], async () => {
+  const tables = [...captureScope(db), ...serverWrittenTables(db), db.syncMeta];
+  await db.transaction('rw', tables, async () => {
     if (!(await everythingSynced(db))) throw new UnsyncedWorkError();
-    await Promise.all([...captureScope(db), db.syncMeta].map((table) => table.clear()));
+    await Promise.all(tables.map((table) => table.clear()));
   });
 }

@@ -3,6 +3,7 @@ import type { CaptureRow, ServerRecord } from '../../db/captureRecord';
 import { caseIdOf, captureScope, isCaptureEntity, tableFor, tabletData } from './captureTables';
 import { entriesFor, refreshSyncState } from './syncState';
 import { serverCheckOf } from '../scans/serverCheck';
+import { escalationServerStateOf, isServerWrittenEntity, mergeServerWritten, serverWrittenTables } from './serverWritten';
 
 /**
  * Merges one pulled record. A local record with changes the server has not applied is never
@@ -10,6 +11,7 @@ import { serverCheckOf } from '../scans/serverCheck';
  */
 export async function mergePulled(db: SitebandDb, record: ServerRecord, now = Date.now()): Promise<'stored' | 'same' | 'conflict' | 'skipped'> {
   const entity = record.entity;
+  if (isServerWrittenEntity(entity)) return db.transaction('rw', serverWrittenTables(db), () => mergeServerWritten(db, entity, record));
   if (!isCaptureEntity(entity)) return 'skipped';
   const table = tableFor(db, entity);
   return db.transaction('rw', captureScope(db), async () => {
@@ -20,6 +22,8 @@ export async function mergePulled(db: SitebandDb, record: ServerRecord, now = Da
       if (entity === 'attachment' && typeof record.data.uploadedAt === 'string') await db.photos.update(record.id, { uploadedAt: record.data.uploadedAt });
       // ...or the server's recomputation of a scan, written with a new syncSeq at the same version.
       if (entity === 'scan') await db.scans.update(record.id, { serverCheck: serverCheckOf(record.data) });
+      // ...or a safety officer's acknowledgement, if the server keeps the version for it.
+      if (entity === 'escalation') await db.escalations.update(record.id, { serverState: escalationServerStateOf(record.data) });
       await refreshSyncState(db, entity, record.id);
       return 'same';
     }
@@ -50,6 +54,7 @@ export async function mergePulled(db: SitebandDb, record: ServerRecord, now = Da
       row.receivedBytes = Number(record.data.receivedBytes ?? 0);
     }
     if (entity === 'scan') row.serverCheck = serverCheckOf(record.data);
+    if (entity === 'escalation') row.serverState = escalationServerStateOf(record.data);
     await table.put(row);
     return 'stored';
   });
