@@ -2,6 +2,7 @@
 // Usage: BASE_URL=http://127.0.0.1:3999 SITEBAND_DEMO_PASSWORD=... node pwa/e2e/run.mjs
 import assert from 'node:assert/strict';
 import { after, before, describe, it } from 'node:test';
+import { adminTests } from './admin.mjs';
 import { blockingViolations } from './axe.mjs';
 import { captureTests } from './capture.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
@@ -28,14 +29,14 @@ if (!BASE_URL) {
   process.exit(2);
 }
 
-const ALL_TABS = ['Cases', 'Capture', 'Review queue', 'Compound library', 'Escalations', 'Users', 'Account'];
+const ALL_TABS = ['Cases', 'Capture', 'Review queue', 'Compound library', 'Escalations', 'Users', 'Audit trail', 'Account'];
 
 // The roles' tabs as the product brief defines them; every role also has Account.
 const ROLES = [
   { role: 'inspector', email: 'inspector@demo.test', roleLabel: 'Inspector', tabs: ['Cases', 'Capture', 'Account'] },
   { role: 'supervisor', email: 'supervisor@demo.test', roleLabel: 'Supervisor', tabs: ['Review queue', 'Compound library', 'Account'] },
   { role: 'safety_officer', email: 'safety@demo.test', roleLabel: 'Safety officer', tabs: ['Escalations', 'Account'] },
-  { role: 'admin', email: 'admin@demo.test', roleLabel: 'Administrator', tabs: ['Users', 'Account'] },
+  { role: 'admin', email: 'admin@demo.test', roleLabel: 'Administrator', tabs: ['Users', 'Audit trail', 'Account'] },
 ];
 
 /** Asks the API directly whether a refresh token is still accepted. */
@@ -290,3 +291,4 @@ describe('offline', { concurrency: false }, () => {
 identifyTests({ baseUrl: BASE_URL, password: PASSWORD });
 libraryTests({ baseUrl: BASE_URL, password: PASSWORD });
 captureTests({ baseUrl: BASE_URL, password: PASSWORD });
+adminTests({ baseUrl: BASE_URL, password: PASSWORD });

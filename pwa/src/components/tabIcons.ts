@@ -5,6 +5,7 @@ import {
   flaskOutline,
   folderOpenOutline,
   peopleOutline,
+  shieldCheckmarkOutline,
   pulseOutline,
 } from 'ionicons/icons';
 import type { TabId } from '../features/navigation/roleTabs';
@@ -17,5 +18,6 @@ export const TAB_ICONS: Readonly<Record<TabId, string>> = {
   library: flaskOutline,
   escalations: alertCircleOutline,
   users: peopleOutline,
+  audit: shieldCheckmarkOutline,
   account: personCircleOutline,
 };

@@ -25,6 +25,7 @@ import CompoundDetailPage from './CompoundDetailPage';
 import CompoundEditPage from './CompoundEditPage';
 import EscalationsPage from './EscalationsPage';
 import UsersPage from './UsersPage';
+import AuditPage from './AuditPage';
 import AccountPage from './AccountPage';
 
 /** The screens of each tab, relative to /tabs; a tab's detail routes sit under its own path. */
@@ -52,6 +53,7 @@ const TAB_ROUTES: Readonly<Record<TabId, readonly { path: string; Page: Componen
   ],
   escalations: [{ path: 'escalations', Page: EscalationsPage }],
   users: [{ path: 'users', Page: UsersPage }],
+  audit: [{ path: 'audit', Page: AuditPage }],
   account: [
     { path: 'account', Page: AccountPage },
     // Every role reads the compound library and runs structure checks here; only supervisors curate.

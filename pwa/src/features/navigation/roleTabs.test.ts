@@ -9,7 +9,7 @@ describe('role → tabs', () => {
     expect(ids('inspector')).toEqual(['cases', 'capture', 'account']);
     expect(ids('supervisor')).toEqual(['review', 'library', 'account']);
     expect(ids('safety_officer')).toEqual(['escalations', 'account']);
-    expect(ids('admin')).toEqual(['users', 'account']);
+    expect(ids('admin')).toEqual(['users', 'audit', 'account']);
   });
 
   it('shares no work tab between roles, and every tab belongs to some role', () => {

@@ -1,7 +1,7 @@
 import type { Role } from '@siteband/shared';
 
 /** The tabs of the signed-in shell. */
-export type TabId = 'cases' | 'capture' | 'review' | 'library' | 'escalations' | 'users' | 'account';
+export type TabId = 'cases' | 'capture' | 'review' | 'library' | 'escalations' | 'users' | 'audit' | 'account';
 
 export interface TabDefinition {
   id: TabId;
@@ -23,6 +23,7 @@ export const TABS: Readonly<Record<TabId, TabDefinition>> = {
   library: tab('library'),
   escalations: tab('escalations'),
   users: tab('users'),
+  audit: tab('audit'),
   account: tab('account'),
 };
 
@@ -34,7 +35,7 @@ const ROLE_TABS: Readonly<Record<Role, readonly TabId[]>> = {
   inspector: ['cases', 'capture', 'account'],
   supervisor: ['review', 'library', 'account'],
   safety_officer: ['escalations', 'account'],
-  admin: ['users', 'account'],
+  admin: ['users', 'audit', 'account'],
 };
 
 /** The tabs the role sees, in tab-bar order. */
