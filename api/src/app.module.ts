@@ -3,6 +3,7 @@ import { TypeOrmModule } from '@nestjs/typeorm';
 import { AuditModule } from './audit/audit.module';
 import { AttachmentsModule } from './attachments/attachments.module';
 import { AuthModule } from './auth/auth.module';
+import { CaseArchivesModule } from './case-archives/case-archives.module';
 import { CasesModule } from './cases/cases.module';
 import type { AppConfig } from './config/app-config';
 import { APP_CONFIG, AppConfigModule } from './config/config.module';
@@ -32,6 +33,7 @@ import { UsersModule } from './users/users.module';
     AuthModule,
     HealthModule,
     CasesModule,
+    CaseArchivesModule,
     SyncModule,
     AttachmentsModule,
     LibraryModule,

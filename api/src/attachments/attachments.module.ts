@@ -9,5 +9,6 @@ import { AttachmentsController } from './attachments.controller';
   imports: [StorageModule, ScansModule],
   controllers: [AttachmentsController],
   providers: [AttachmentUploadsService],
+  exports: [AttachmentUploadsService],
 })
 export class AttachmentsModule {}

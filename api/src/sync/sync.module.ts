@@ -11,5 +11,6 @@ import { SyncService } from './sync.service';
   imports: [ScansModule, AuditModule],
   controllers: [SyncController],
   providers: [SyncService, ChangeApplier, SyncRegistry],
+  exports: [SyncService, SyncRegistry],
 })
 export class SyncModule {}
