@@ -11,6 +11,7 @@ import { buildDataSourceOptions } from './database/data-source-options';
 import { HealthModule } from './health/health.module';
 import { IdentifyModule } from './identify/identify.module';
 import { LibraryModule } from './library/library.module';
+import { ReportsModule } from './reports/reports.module';
 import { ReviewModule } from './review/review.module';
 import { SymmetryModule } from './symmetry/symmetry.module';
 import { SyncModule } from './sync/sync.module';
@@ -41,6 +42,7 @@ import { UsersModule } from './users/users.module';
     SymmetryModule,
     AuditModule,
     ReviewModule,
+    ReportsModule,
   ],
 })
 export class AppModule {}

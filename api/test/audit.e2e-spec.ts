@@ -2,7 +2,7 @@ import { randomBytes, randomUUID } from 'node:crypto';
 import { entryHash } from '../src/audit/audit-hash';
 import type { AuditEntryDto } from '../src/audit/dto/audit.dto';
 import { demo, pullAll, push, remove, upsert, type Change } from './support/field-records';
-import { DEMO, expectErrorShape, signIn, startTestApp, type TestApp } from './support/test-app';
+import { addUser, DEMO, expectErrorShape, signIn, startTestApp, type TestApp } from './support/test-app';
 
 describe('Audit trail (e2e, MariaDB)', () => {
   let t: TestApp;
@@ -19,13 +19,7 @@ describe('Audit trail (e2e, MariaDB)', () => {
     supervisor = (await signIn(t, DEMO.supervisor)).accessToken;
     safety = (await signIn(t, DEMO.safety_officer)).accessToken;
     admin = (await signIn(t, DEMO.admin)).accessToken;
-    await t
-      .http()
-      .post('/api/users')
-      .set('Authorization', `Bearer ${admin}`)
-      .send({ email: 'audit.second@demo.test', displayName: 'Second Inspector', role: 'inspector', password: 'second-inspector-pw' })
-      .expect(201);
-    const other = await signIn(t, 'audit.second@demo.test', 'second-inspector-pw');
+    const other = await addUser(t, admin, 'audit.second@demo.test', 'inspector');
     second = { token: other.accessToken, id: other.user.id };
   });
   afterAll(async () => {

@@ -1,12 +1,11 @@
-import { createHash } from 'node:crypto';
 import { isDeepStrictEqual } from 'node:util';
 import { Injectable, Logger } from '@nestjs/common';
 import { DataSource } from 'typeorm';
 import { Attachment } from '../attachments/attachment.entity';
 import { IdentifyService } from '../identify/identify.service';
-import { ObjectStorageService } from '../storage/object-storage.service';
 import { lockSyncCounter, takeSyncSeq } from '../sync/sync-sequence';
 import { compareIdentifications } from './identification-comparison';
+import { RawScanFiles } from './raw-scan-files';
 import { recomputeRequest } from './recompute-request';
 import { scanResultRecord } from './scan-result-record';
 import { Scan } from './scan.entity';
@@ -27,7 +26,7 @@ export class ScanRecomputeService {
 
   constructor(
     private readonly dataSource: DataSource,
-    private readonly storage: ObjectStorageService,
+    private readonly rawFiles: RawScanFiles,
     private readonly identify: IdentifyService,
   ) {}
 
@@ -37,18 +36,17 @@ export class ScanRecomputeService {
    */
   async run(scanId: string): Promise<void> {
     const scan = await this.dataSource.getRepository(Scan).findOneBy({ id: scanId });
-    const raw = scan?.rawAttachmentId ? await this.dataSource.getRepository(Attachment).findOneBy({ id: scan.rawAttachmentId }) : null;
-    if (!scan || scan.deletedAt || !raw || raw.deletedAt || !raw.storageKey) return;
-    if (raw.kind !== 'raw-scan' || raw.ownerType !== 'scan' || raw.ownerId !== scan.id) return;
+    if (!scan || scan.deletedAt) return;
+    const raw = await this.rawFiles.attachmentOf(scan);
+    if (!raw?.storageKey) return;
     await this.store(scan, await this.recompute(scan, raw));
   }
 
   private async recompute(scan: Scan, raw: Attachment): Promise<RecomputedFields> {
     let stage = 'read the raw file from object storage';
     try {
-      const bytes = await this.storage.read(raw.storageKey!);
-      // The file was verified on upload; checked again so a damaged stored copy is never identified.
-      if (createHash('sha256').update(bytes).digest('hex') !== raw.sha256) throw new Error(`the stored file no longer has SHA-256 ${raw.sha256}`);
+      // Checked again against the SHA-256 verified on upload, so a damaged stored copy is never identified.
+      const bytes = await this.rawFiles.read(raw);
       stage = 'identify the raw file';
       const { request, parametersFrom } = recomputeRequest(scan);
       const serverResult = scanResultRecord(await this.identify.identifyFile({ originalname: raw.fileName, buffer: bytes }, request));

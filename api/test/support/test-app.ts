@@ -114,6 +114,18 @@ export async function signIn(
   return response.body;
 }
 
+/** Adds a user through the admin route (password `<role>-password-2026`) and signs them in. */
+export async function addUser(testApp: TestApp, adminToken: string, email: string, role: string) {
+  const password = `${role}-password-2026`;
+  await testApp
+    .http()
+    .post('/api/users')
+    .set('Authorization', `Bearer ${adminToken}`)
+    .send({ email, displayName: `${role} ${email.split('@')[0]}`, role, password })
+    .expect(201);
+  return signIn(testApp, email, password);
+}
+
 /** Checks the one error shape (`path` may be a string or an asymmetric matcher). */
 export function expectErrorShape(body: Record<string, unknown>, statusCode: number, path: unknown): void {
   expect(body).toEqual(

@@ -1,0 +1,147 @@
+import { randomUUID } from 'node:crypto';
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { convert } from 'jcampconverter';
+import { ScanRecomputeQueue } from '../src/scans/scan-recompute.queue';
+import { demo, push, sha256, upsert, uploadWhole } from './support/field-records';
+import { startS3Fake, type S3Fake } from './support/s3-fake';
+import { addUser, DEMO, expectErrorShape, signIn, startTestApp, type TestApp } from './support/test-app';
+
+const RAMAN_FIXTURE = 'synthetic-raman-ammonium-nitrate-785.csv';
+const IR_FIXTURE = 'synthetic-ir-ethanol-liquid.csv';
+const fixture = (name: string) => readFileSync(join(__dirname, '..', '..', 'fixtures', 'spectra', name));
+
+/** The fixture's points as written in the file (comment and header lines skipped), ascending. */
+function pointsOf(bytes: Buffer): { x: number[]; y: number[] } {
+  const rows = bytes
+    .toString('utf8')
+    .split('\n')
+    .filter((line) => /^[\d.-]/.test(line))
+    .map((line) => line.split(',').map(Number))
+    .sort((a, b) => a[0] - b[0]);
+  return { x: rows.map((row) => row[0]), y: rows.map((row) => row[1]) };
+}
+
+/** Reads any answer body as UTF-8 text (supertest only does so for text/* types). */
+function asText(res: unknown, done: (error: Error | null, body: string) => void): void {
+  const stream = res as NodeJS.ReadableStream;
+  let text = '';
+  stream.on('data', (chunk: Buffer) => (text += chunk.toString('utf8')));
+  stream.on('end', () => done(null, text));
+}
+
+describe('Scan export and case report (e2e, MariaDB + S3 fake)', () => {
+  let s3: S3Fake;
+  let t: TestApp;
+  let inspector: string;
+  let otherInspector: string;
+  let supervisor: string;
+  let safety: string;
+  let admin: string;
+  let caseId: string;
+  let sampleId: string;
+
+  beforeAll(async () => {
+    s3 = await startS3Fake();
+    t = await startTestApp({ env: s3.env });
+    inspector = (await signIn(t, DEMO.inspector)).accessToken;
+    supervisor = (await signIn(t, DEMO.supervisor)).accessToken;
+    safety = (await signIn(t, DEMO.safety_officer)).accessToken;
+    admin = (await signIn(t, DEMO.admin)).accessToken;
+    otherInspector = (await addUser(t, admin, 'reports.other@demo.test', 'inspector')).accessToken;
+    caseId = randomUUID();
+    sampleId = randomUUID();
+    const results = await push(t, inspector, [upsert('case', caseId, demo.case()), upsert('sample', sampleId, demo.sample(caseId))]);
+    expect(results.map((r) => r.status)).toEqual(['applied', 'applied']);
+  });
+  afterAll(async () => {
+    await t?.app.get(ScanRecomputeQueue).idle();
+    await t?.close();
+    await s3?.close();
+  });
+
+  /** Pushes a scan with its raw file and uploads the bytes (unless `upload` is false); returns the scan id. */
+  async function scanWithRaw(options: { name: string; bytes: Buffer; technique: 'ir' | 'raman'; contentType?: string; upload?: boolean; result?: Record<string, unknown> | null }) {
+    const scanId = randomUUID();
+    const rawId = randomUUID();
+    const raman = options.technique === 'raman';
+    const results = await push(t, inspector, [
+      upsert('scan', scanId, demo.scan(sampleId, {
+        technique: options.technique, excitationNm: raman ? 785 : null, rawAttachmentId: rawId, rawSha256: sha256(options.bytes), result: options.result ?? null,
+      })),
+      upsert('attachment', rawId, {
+        ownerType: 'scan', ownerId: scanId, kind: 'raw-scan', fileName: options.name, contentType: options.contentType ?? 'text/csv',
+        size: options.bytes.length, sha256: sha256(options.bytes),
+      }),
+    ]);
+    expect(results.map((r) => r.status)).toEqual(['applied', 'applied']);
+    if (options.upload !== false) await uploadWhole(t, inspector, rawId, options.bytes, options.contentType ?? 'text/csv').expect(200);
+    return scanId;
+  }
+
+  const jdx = (scanId: string, token: string) => t.http().get(`/api/scans/${scanId}/spectrum.jdx`).set('Authorization', `Bearer ${token}`);
+
+  describe('GET /api/scans/:scanId/spectrum.jdx', () => {
+    let ramanScan: string;
+    beforeAll(async () => {
+      ramanScan = await scanWithRaw({ name: RAMAN_FIXTURE, bytes: fixture(RAMAN_FIXTURE), technique: 'raman' });
+    });
+
+    it('writes the raw file as JCAMP-DX that jcampconverter reads back to the same points', async () => {
+      const response = await jdx(ramanScan, inspector).buffer(true).parse(asText).expect(200);
+      expect(response.headers['content-type']).toBe('chemical/x-jcamp-dx; charset=utf-8');
+      expect(response.headers['content-disposition']).toContain(`scan-${ramanScan}.jdx`);
+      const text = response.body as string;
+      expect(text).toMatch(/##DATA TYPE=RAMAN SPECTRUM/);
+      expect(text).toContain(`##$SITEBAND SCAN=${ramanScan}`);
+      expect(text).not.toContain('SITEBAND RESAMPLED');
+
+      const parsed = convert(text).flatten[0];
+      const { x, y } = parsed.spectra[0].data as { x: number[]; y: number[] };
+      const expected = pointsOf(fixture(RAMAN_FIXTURE));
+      expect(x).toHaveLength(expected.x.length);
+      const range = Math.max(...expected.y) - Math.min(...expected.y);
+      x.forEach((value, i) => {
+        expect(value).toBeCloseTo(expected.x[i], 6);
+        expect(Math.abs(y[i] - expected.y[i])).toBeLessThan(1e-6 * range);
+      });
+    });
+
+    it('resamples an uneven axis onto even spacing and says so', async () => {
+      const lines = ['Wavenumber (cm-1),Absorbance'];
+      for (let i = 0; i < 40; i++) lines.push(`${(600 + i * 10 + (i % 3 === 0 ? 1.5 : 0)).toFixed(1)},${(0.1 + 0.01 * i).toFixed(3)}`);
+      const scanId = await scanWithRaw({ name: 'uneven.csv', bytes: Buffer.from(`${lines.join('\n')}\n`), technique: 'ir' });
+      const response = await jdx(scanId, supervisor).buffer(true).parse(asText).expect(200);
+      const text = response.body as string;
+      expect(text).toMatch(/##\$SITEBAND RESAMPLED=linear interpolation of 40 points onto \d+ evenly spaced points/);
+      const { x } = convert(text).flatten[0].spectra[0].data as { x: number[] };
+      const steps = x.slice(1).map((value, i) => value - x[i]);
+      for (const step of steps) expect(step).toBeCloseTo(steps[0], 6);
+      expect(x[0]).toBeCloseTo(601.5, 6);
+    });
+
+    it('answers 404 without a raw file, 409 while uploading and 422 for an unreadable file', async () => {
+      const bare = randomUUID();
+      await push(t, inspector, [upsert('scan', bare, demo.scan(sampleId))]);
+      const none = await jdx(bare, inspector).expect(404);
+      expectErrorShape(none.body, 404, `/api/scans/${bare}/spectrum.jdx`);
+      expect(none.body.message).toMatch(/no raw file/);
+
+      const pending = await scanWithRaw({ name: IR_FIXTURE, bytes: fixture(IR_FIXTURE), technique: 'ir', upload: false });
+      expect((await jdx(pending, inspector).expect(409)).body.message).toMatch(/not completely uploaded/);
+
+      const garbage = await scanWithRaw({ name: 'notes.txt', bytes: Buffer.from('not a spectrum at all\njust words\n'), technique: 'ir', contentType: 'text/plain' });
+      expect((await jdx(garbage, inspector).expect(422)).body.message).toMatch(/cannot be read/);
+    });
+
+    it('is for the readers of the case only', async () => {
+      await jdx(ramanScan, safety).expect(200);
+      const other = await jdx(ramanScan, otherInspector).expect(404);
+      expectErrorShape(other.body, 404, `/api/scans/${ramanScan}/spectrum.jdx`);
+      await jdx(ramanScan, admin).expect(403);
+      await t.http().get(`/api/scans/${ramanScan}/spectrum.jdx`).expect(401);
+      await jdx(randomUUID(), supervisor).expect(404);
+      await jdx('not-a-uuid', supervisor).expect(400);
+    });
+  });
+});
