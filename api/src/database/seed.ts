@@ -1,5 +1,8 @@
+import { NestFactory } from '@nestjs/core';
+import { AppModule } from '../app.module';
 import { DEFAULT_DEMO_PASSWORD } from '../config/app-config';
 import { createCliDataSource } from './data-source';
+import { seedDemoCases } from './demo-cases.seeder';
 import { DEMO_ORGANISATION } from './seed-data';
 import { seedDemoData } from './seeder';
 
@@ -21,6 +24,16 @@ async function main(): Promise<void> {
     for (const email of report.updated) console.log(`Seed: updated ${email}`);
   } finally {
     await dataSource.destroy();
+  }
+  // The demo cases go through the API's own services (sync, uploads, recomputation, review), so they need
+  // the whole application (database and object storage), without its HTTP server.
+  const app = await NestFactory.createApplicationContext(AppModule, { logger: ['error', 'warn'] });
+  try {
+    const cases = await seedDemoCases(app);
+    console.log(`Seed: demo cases created ${cases.created.length}, unchanged ${cases.unchanged.length}`);
+    for (const site of cases.created) console.log(`Seed: created case ${site}`);
+  } finally {
+    await app.close();
   }
 }
 
