@@ -1,33 +1,12 @@
 import { useTranslation } from 'react-i18next';
 import { SyncBadge } from '../components/cases/SyncBadge';
+import { ServerCheckView } from '../components/spectrum/ServerCheckView';
 import type { EscalationRow } from '../db/escalationsTable';
 import type { PhotoRow } from '../db/photosTable';
 import type { ScanRow } from '../db/scansTable';
 import { formatAgreement } from '../features/identify/format';
 import { storedCandidates, storedVerdict } from '../features/scans/storedResult';
 import { formatDateTime } from '../i18n/format';
-
-/** The server's recomputation as the inspector reads it: not yet, failed, agrees, or differs (with each difference). */
-function ServerCheck({ scan }: { scan: ScanRow }) {
-  const { t } = useTranslation();
-  const check = scan.serverCheck;
-  let text = t('capture.scanDetail.serverPending');
-  if (check?.serverRecomputeError) text = t('capture.scanDetail.serverFailed', { reason: check.serverRecomputeError });
-  else if (check?.resultMismatch === false) text = t('capture.scanDetail.serverAgrees');
-  else if (check?.resultMismatch === true) text = t('capture.scanDetail.serverDiffers');
-  return (
-    <div data-testid="server-check" data-mismatch={check ? String(check.resultMismatch) : 'pending'}>
-      <p>{text}</p>
-      {check?.resultMismatch && (
-        <ul>
-          {check.differences.map((d) => (
-            <li key={d}>{d}</li>
-          ))}
-        </ul>
-      )}
-    </div>
-  );
-}
 
 /** A saved scan as stored on the tablet: how it was taken, its raw file, its likely compounds, escalation and the server's check. */
 export function SampleScanDetail({ scan, raw, escalations }: { scan: ScanRow; raw: PhotoRow | null; escalations: EscalationRow[] }) {
@@ -116,7 +95,7 @@ export function SampleScanDetail({ scan, raw, escalations }: { scan: ScanRow; ra
         <h2 id="server-check-heading" className="sb-panel__heading">
           {t('capture.scanDetail.serverHeading')}
         </h2>
-        <ServerCheck scan={scan} />
+        <ServerCheckView check={scan.serverCheck} />
       </section>
     </>
   );

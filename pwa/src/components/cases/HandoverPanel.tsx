@@ -5,13 +5,13 @@ import { captureDb } from '../../features/cases/captureDb';
 import { localDateTimeValue } from '../../features/cases/caseDraft';
 import { addHandover } from '../../features/samples/saveSample';
 import { useHandovers } from '../../features/samples/useSamples';
-import { formatDateTime } from '../../i18n/format';
 import { Field } from './Field';
+import { HandoverTable } from './HandoverTable';
 import { SyncBadge } from './SyncBadge';
 
 /** The sample's chain of custody: every hand-over in order (append-only) and the form for the next one. */
 export function HandoverPanel({ caseId, sampleId, defaultFrom, editable }: { caseId: string; sampleId: string; defaultFrom: string; editable: boolean }) {
-  const { t, i18n } = useTranslation();
+  const { t } = useTranslation();
   const handovers = useHandovers(sampleId);
   const empty = () => ({ from: handovers?.at(-1)?.data.to ?? defaultFrom, to: '', at: localDateTimeValue(new Date()), sealNumber: '', note: '' });
   const [form, setForm] = useState(empty);
@@ -44,35 +44,20 @@ export function HandoverPanel({ caseId, sampleId, defaultFrom, editable }: { cas
       </h2>
       <p className="sb-muted">{t('capture.handover.appendOnly')}</p>
       {handovers && handovers.length > 0 && (
-        <div className="sb-table-wrap">
-          <table className="sb-table" data-testid="handovers">
-            <thead>
-              <tr>
-                <th scope="col">{t('capture.handover.at')}</th>
-                <th scope="col">{t('capture.handover.from')}</th>
-                <th scope="col">{t('capture.handover.to')}</th>
-                <th scope="col">{t('capture.handover.seal')}</th>
-                <th scope="col">{t('capture.handover.note')}</th>
-                <th scope="col">{t('capture.case.syncState')}</th>
-              </tr>
-            </thead>
-            <tbody>
-              {handovers.map((h) => (
-                <tr key={h.id}>
-                  <td>{formatDateTime(Date.parse(h.data.at), i18n.language)}</td>
-                  <td>{h.data.from}</td>
-                  <td>{h.data.to}</td>
-                  <td>{h.data.sealNumber ?? '—'}</td>
-                  <td>{h.data.note ?? ''}</td>
-                  <td>
-                    <SyncBadge state={h.sync} />
-                    {h.rejectedReason && <span className="sb-error">{t('capture.sync.rejected', { reason: h.rejectedReason })}</span>}
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <HandoverTable
+          testId="handovers"
+          extraHeading={t('capture.case.syncState')}
+          lines={handovers.map((h) => ({
+            id: h.id,
+            ...h.data,
+            extra: (
+              <>
+                <SyncBadge state={h.sync} />
+                {h.rejectedReason && <span className="sb-error">{t('capture.sync.rejected', { reason: h.rejectedReason })}</span>}
+              </>
+            ),
+          }))}
+        />
       )}
       {editable && (
         <form onSubmit={submit} noValidate aria-label={t('capture.handover.formLabel')}>

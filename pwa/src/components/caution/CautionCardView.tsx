@@ -1,3 +1,4 @@
+import { useId } from 'react';
 import { useTranslation } from 'react-i18next';
 import type { CautionCard } from '@siteband/shared';
 import { PictogramBadge } from './PictogramBadge';
@@ -6,7 +7,7 @@ import './caution.css';
 /** One candidate's caution card: signal word, pictograms, H-statements, protective cautions, UN number. */
 export function CautionCardView({ card }: { card: CautionCard }) {
   const { t } = useTranslation();
-  const headingId = `caution-card-${card.compoundId}`;
+  const headingId = useId();
   return (
     <section className="sb-caution-card" aria-labelledby={headingId} data-testid={`caution-card-${card.compoundId}`}>
       <h4 id={headingId} className="sb-caution-card__heading">

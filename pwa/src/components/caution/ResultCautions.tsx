@@ -1,3 +1,4 @@
+import { useId } from 'react';
 import { IonIcon } from '@ionic/react';
 import { warningOutline } from 'ionicons/icons';
 import { useTranslation } from 'react-i18next';
@@ -6,9 +7,10 @@ import './caution.css';
 /** The cautions every result carries: presumptive identification, laboratory confirmation, SDS and codes. */
 export function ResultCautions({ cautions }: { cautions: readonly string[] }) {
   const { t } = useTranslation();
+  const headingId = useId();
   return (
-    <aside className="sb-caution" aria-labelledby="result-cautions-heading" data-testid="result-cautions">
-      <h3 id="result-cautions-heading" className="sb-caution__heading">
+    <aside className="sb-caution" aria-labelledby={headingId} data-testid="result-cautions">
+      <h3 id={headingId} className="sb-caution__heading">
         <IonIcon icon={warningOutline} aria-hidden="true" /> {t('identify.cautions.heading')}
       </h3>
       <ul>

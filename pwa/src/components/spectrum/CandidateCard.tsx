@@ -1,3 +1,4 @@
+import { useId } from 'react';
 import { useTranslation } from 'react-i18next';
 import { CautionCardView } from '../caution/CautionCardView';
 import type { CandidateView } from '../../features/identify/resultView';
@@ -19,7 +20,7 @@ export function CandidateCard({ view, selected, onSelect }: CandidateCardProps) 
   const { t, i18n } = useTranslation();
   const lang = i18n.language;
   const { candidate: c } = view;
-  const headingId = `candidate-${c.id}`;
+  const headingId = useId();
   const label = (l: string | null, mode: string | null) => [mode, l].filter(Boolean).join(' · ') || t('identify.candidate.noSymmetry');
   return (
     <article

@@ -1,3 +1,4 @@
+import { useId } from 'react';
 import { useTranslation } from 'react-i18next';
 import type { Mixture } from '@siteband/shared';
 import { formatAgreement, formatShare } from '../../features/identify/format';
@@ -6,9 +7,10 @@ import { formatAgreement, formatShare } from '../../features/identify/format';
 export function MixtureSummary({ mixture }: { mixture: Mixture }) {
   const { t, i18n } = useTranslation();
   const lang = i18n.language;
+  const headingId = useId();
   return (
-    <section className="sb-panel sb-mixture" aria-labelledby="mixture-heading" data-testid="mixture">
-      <h3 id="mixture-heading" className="sb-panel__heading">
+    <section className="sb-panel sb-mixture" aria-labelledby={headingId} data-testid="mixture">
+      <h3 id={headingId} className="sb-panel__heading">
         {t('identify.mixture.heading')}
       </h3>
       <p>

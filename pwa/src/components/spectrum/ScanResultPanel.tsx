@@ -1,4 +1,4 @@
-import { useMemo, useState } from 'react';
+import { useMemo, useState, useId } from 'react';
 import { useTranslation } from 'react-i18next';
 import type { IdentifyResult } from '@siteband/shared';
 import type { IdentifyOutcome } from '../../features/identify/protocol';
@@ -15,9 +15,12 @@ import './results.css';
 export interface ScanResultPanelProps {
   readonly outcome: IdentifyOutcome;
   /** True once this result's caution cards were acknowledged (the host keeps that state). */
-  readonly acknowledged: boolean;
-  /** Called when the inspector acknowledges the caution cards; the host marks the scan reviewed-by-inspector. */
-  readonly onAcknowledge: (result: IdentifyResult) => void;
+  readonly acknowledged?: boolean;
+  /**
+   * Called when the inspector acknowledges the caution cards; the host marks the scan reviewed-by-inspector.
+   * Without it (a supervisor reading a saved scan) the panel asks for no acknowledgement.
+   */
+  readonly onAcknowledge?: (result: IdentifyResult) => void;
   /** Called with the acknowledged result when it requires escalation; the host creates the escalation record. */
   readonly onEscalation?: (result: IdentifyResult) => void;
 }
@@ -31,19 +34,22 @@ export function ScanResultPanel({ outcome, acknowledged, onAcknowledge, onEscala
   const { result, plot, processed } = outcome;
   const view = useMemo(() => resultView(result), [result]);
   const [selectedId, setSelectedId] = useState<string | null>(null);
+  // Unique per panel: a review page shows several scans at once.
+  const plotHeadingId = useId();
+  const likelyHeadingId = useId();
   const candidates = view.status === 'ranked' ? view.candidates : [];
   const selected = candidates.find((c) => c.candidate.id === selectedId) ?? candidates[0];
   const yLabel = result.technique === 'ir' ? t('identify.plot.yIr') : t('identify.plot.yRaman');
 
   function acknowledge() {
-    onAcknowledge(result);
+    onAcknowledge?.(result);
     if (result.escalation.required) onEscalation?.(result);
   }
 
   return (
     <div className="sb-result" data-testid="scan-result">
-      <section className="sb-panel sb-panel--plot" aria-labelledby="plot-heading">
-        <h2 id="plot-heading" className="sb-panel__heading">
+      <section className="sb-panel sb-panel--plot" aria-labelledby={plotHeadingId}>
+        <h2 id={plotHeadingId} className="sb-panel__heading">
           {outcome.title ? t('identify.plot.headingTitled', { title: outcome.title }) : t('identify.plot.heading')}
         </h2>
         <LazySpectrumPlot
@@ -69,8 +75,8 @@ export function ScanResultPanel({ outcome, acknowledged, onAcknowledge, onEscala
       </section>
 
       {view.status === 'ranked' && (
-        <section aria-labelledby="likely-heading" className="sb-likely">
-          <h2 id="likely-heading" className="sb-section-title">
+        <section aria-labelledby={likelyHeadingId} className="sb-likely">
+          <h2 id={likelyHeadingId} className="sb-section-title">
             {t('identify.likely.heading')}
           </h2>
           <p className="sb-muted">{t('identify.likely.intro', {
@@ -94,7 +100,7 @@ export function ScanResultPanel({ outcome, acknowledged, onAcknowledge, onEscala
       )}
 
       <ResultCautions cautions={view.cautions} />
-      <AcknowledgeCautions escalation={result.escalation} acknowledged={acknowledged} onAcknowledge={acknowledge} />
+      {onAcknowledge && <AcknowledgeCautions escalation={result.escalation} acknowledged={acknowledged ?? false} onAcknowledge={acknowledge} />}
     </div>
   );
 }
