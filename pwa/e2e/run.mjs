@@ -8,6 +8,7 @@ import { captureTests } from './capture.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
 import { identifyTests } from './identify.mjs';
 import { libraryTests } from './library.mjs';
+import { reviewTests } from './review.mjs';
 import {
   ageStoredSession,
   openTab,
@@ -292,3 +293,4 @@ identifyTests({ baseUrl: BASE_URL, password: PASSWORD });
 libraryTests({ baseUrl: BASE_URL, password: PASSWORD });
 captureTests({ baseUrl: BASE_URL, password: PASSWORD });
 adminTests({ baseUrl: BASE_URL, password: PASSWORD });
+reviewTests({ baseUrl: BASE_URL, password: PASSWORD });

@@ -19,6 +19,7 @@ import SampleScanPage from './SampleScanPage';
 import CapturePage from './CapturePage';
 import InstrumentCheckPage from './InstrumentCheckPage';
 import ReviewQueuePage from './ReviewQueuePage';
+import CaseReviewPage from './CaseReviewPage';
 import LibraryPage from './LibraryPage';
 import StructureCheckPage from './StructureCheckPage';
 import CompoundDetailPage from './CompoundDetailPage';
@@ -43,7 +44,10 @@ const TAB_ROUTES: Readonly<Record<TabId, readonly { path: string; Page: Componen
     { path: 'capture', Page: CapturePage },
     { path: 'capture/instrument-check', Page: InstrumentCheckPage },
   ],
-  review: [{ path: 'review', Page: ReviewQueuePage }],
+  review: [
+    { path: 'review', Page: ReviewQueuePage },
+    { path: 'review/cases/:caseId', Page: CaseReviewPage },
+  ],
   library: [
     { path: 'library', Page: LibraryPage },
     { path: 'library/structure', Page: StructureCheckPage },

@@ -1,0 +1,20 @@
+import { useTranslation } from 'react-i18next';
+import type { Decision } from '../../features/review/types';
+import { formatDateTime } from '../../i18n/format';
+
+/** One decision in words: what, by whom, when, with its reason or comment. */
+export function DecisionLine({ decision }: { decision: Decision }) {
+  const { t, i18n } = useTranslation();
+  return (
+    <div className="sb-decision" data-testid="decision-line" data-kind={decision.kind}>
+      <p>
+        <strong>{t(`review.decision.kind.${decision.kind}`, { compound: decision.compoundName ?? decision.compoundId ?? '' })}</strong>
+      </p>
+      <p className="sb-muted">
+        {t('review.decision.by', { name: decision.decidedByName, at: formatDateTime(Date.parse(decision.decidedAt), i18n.language), revision: decision.revision })}
+      </p>
+      {decision.reason && <p>{t('review.decision.reasonIs', { reason: decision.reason })}</p>}
+      {decision.comment && <p>{t('review.decision.commentIs', { comment: decision.comment })}</p>}
+    </div>
+  );
+}
