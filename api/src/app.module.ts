@@ -8,6 +8,7 @@ import { CasesModule } from './cases/cases.module';
 import type { AppConfig } from './config/app-config';
 import { APP_CONFIG, AppConfigModule } from './config/config.module';
 import { buildDataSourceOptions } from './database/data-source-options';
+import { EscalationsModule } from './escalations/escalations.module';
 import { HealthModule } from './health/health.module';
 import { IdentifyModule } from './identify/identify.module';
 import { LibraryModule } from './library/library.module';
@@ -36,6 +37,7 @@ import { UsersModule } from './users/users.module';
     CasesModule,
     CaseArchivesModule,
     SyncModule,
+    EscalationsModule,
     AttachmentsModule,
     LibraryModule,
     IdentifyModule,

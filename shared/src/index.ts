@@ -13,3 +13,4 @@ export * from './contours/index.js';
 export * from './symmetry/detect/index.js';
 export * from './case-archive/index.js';
 export * from './table/index.js';
+export * from './retry/index.js';

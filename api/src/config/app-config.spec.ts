@@ -70,7 +70,13 @@ describe('loadConfig', () => {
     });
 
     it('starts with a strong secret and never writes a secret file', () => {
-      const production = { NODE_ENV: 'production', JWT_SECRET: STRONG, S3_ACCESS_KEY_ID: 'AKIAEXAMPLEONLY', S3_SECRET_ACCESS_KEY: 'not-the-fake-secret' };
+      const production = {
+        NODE_ENV: 'production',
+        JWT_SECRET: STRONG,
+        S3_ACCESS_KEY_ID: 'AKIAEXAMPLEONLY',
+        S3_SECRET_ACCESS_KEY: 'not-the-fake-secret',
+        APP_PUBLIC_URL: 'https://siteband.example',
+      };
       expect(loadConfig(env(production)).jwt.secret).toBe(STRONG);
       expect(() => statSync(join(dataDir, 'jwt-secret'))).toThrow();
     });

@@ -2,6 +2,7 @@ import { isAbsolute, join, resolve } from 'node:path';
 import { parseDurationSeconds } from './duration';
 import { jwtSecretWeakness, readOrCreateDevJwtSecret } from './jwt-secret';
 import { REPO_ROOT } from './paths';
+import { readMailConfig, type EscalationTimerConfig, type InviteConfig, type MailConfig } from './mail-config';
 import { readS3Config, type S3Config } from './s3-config';
 
 /** Where the API's database lives. */
@@ -38,6 +39,12 @@ export interface AppConfig {
   signIn: { maxFailures: number; windowSeconds: number };
   /** Object storage for attachments (photos, raw scan files). */
   s3: S3Config;
+  /** Outgoing mail through the outbox. */
+  mail: MailConfig;
+  /** Re-notifying unacknowledged escalations and the second contact. */
+  escalationTimers: EscalationTimerConfig;
+  /** Invitations by e-mail. */
+  invite: InviteConfig;
 }
 
 export const NODE_ENVS = ['development', 'test', 'production'] as const;
@@ -168,6 +175,7 @@ export function loadConfig(env: Env = process.env): AppConfig {
   const logLevel = reader.oneOf('LOG_LEVEL', LOG_LEVELS, nodeEnv === 'test' ? 'warn' : 'info');
   const pwaDist = resolveFromRepo(reader.string('PWA_DIST', join(REPO_ROOT, 'pwa', 'dist')));
   const s3 = readS3Config(reader, nodeEnv);
+  const { mail, escalationTimers, invite } = readMailConfig(reader, nodeEnv, port);
 
   if (reader.problems.length) throw new ConfigError(reader.problems);
   return {
@@ -182,5 +190,8 @@ export function loadConfig(env: Env = process.env): AppConfig {
     logLevel,
     signIn: { maxFailures: 5, windowSeconds: 60 },
     s3,
+    mail,
+    escalationTimers,
+    invite,
   };
 }

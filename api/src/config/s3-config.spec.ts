@@ -42,7 +42,7 @@ describe('S3 configuration', () => {
   });
 
   it('needs real credentials in production and uses the provider endpoint by default', () => {
-    const production = { NODE_ENV: 'production' };
+    const production = { NODE_ENV: 'production', APP_PUBLIC_URL: 'https://siteband.example' };
     expect(problems(production)).toEqual(['S3_ACCESS_KEY_ID and S3_SECRET_ACCESS_KEY are required in production']);
     expect(problems({ ...production, S3_ACCESS_KEY_ID: 'S3RVER', S3_SECRET_ACCESS_KEY: 'S3RVER' })).toEqual([
       "S3_ACCESS_KEY_ID / S3_SECRET_ACCESS_KEY may not be the local fake's credentials in production",

@@ -4,7 +4,10 @@ import { EscalationDataDto } from './dto/escalation-data.dto';
 import { Escalation } from './escalation.entity';
 import { Scan } from './scan.entity';
 
-/** Escalations through sync: raised once from the tablet; acknowledging and closing come with their own workflow. */
+/**
+ * Escalations through sync: raised once from the tablet (then permanent for it); the safety officer's
+ * acknowledgement and closing come through the escalations routes and reach the tablet in pulls.
+ */
 export const escalationSyncHandler: SyncHandler<Escalation, EscalationDataDto> = {
   entity: 'escalation',
   target: Escalation,
@@ -40,5 +43,14 @@ export const escalationSyncHandler: SyncHandler<Escalation, EscalationDataDto> =
     reason: row.reason,
     hazardClasses: row.hazardClasses,
     status: row.status,
+    acknowledgedBy: row.acknowledgedBy ?? null,
+    acknowledgedByName: row.acknowledgedByName ?? null,
+    acknowledgedAt: row.acknowledgedAt?.toISOString() ?? null,
+    actionTaken: row.actionTaken ?? null,
+    ppeLevel: row.ppeLevel ?? null,
+    ackComment: row.ackComment ?? null,
+    closedBy: row.closedBy ?? null,
+    closedAt: row.closedAt?.toISOString() ?? null,
+    closeComment: row.closeComment ?? null,
   }),
 };

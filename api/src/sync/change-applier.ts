@@ -1,4 +1,4 @@
-import { Injectable } from '@nestjs/common';
+import { Inject, Injectable, Optional } from '@nestjs/common';
 import { DataSource } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import type { AuthenticatedUser } from '../auth/authenticated-user';
@@ -7,7 +7,7 @@ import type { ChangeResultDto } from './dto/change-result.dto';
 import { SyncRecordDto } from './dto/sync-record.dto';
 import { SyncChange } from './sync-change.entity';
 import type { SyncCounter } from './sync-counter.entity';
-import { ChangeRejected, type ChangeContext, type SyncHandler } from './sync-handler';
+import { ChangeRejected, SYNC_WRITE_LISTENERS, type ChangeContext, type SyncHandler, type SyncWriteListener } from './sync-handler';
 import { SyncRegistry } from './sync-registry';
 import { lockSyncCounter, takeSyncSeq } from './sync-sequence';
 import type { SyncedRecord } from './synced-record';
@@ -29,6 +29,7 @@ export class ChangeApplier {
     private readonly dataSource: DataSource,
     private readonly registry: SyncRegistry,
     private readonly audit: AuditService,
+    @Optional() @Inject(SYNC_WRITE_LISTENERS) private readonly listeners: SyncWriteListener[] = [],
   ) {}
 
   /** Validates, authorises and applies one change; never throws for a bad change (only for server faults). */
@@ -109,7 +110,10 @@ export class ChangeApplier {
     return this.write(ctx, handler, existing, counter, change.changeId, { caseId, action: 'update', before });
   }
 
-  /** Bumps the version, takes the next sequence number, saves and records the change in the audit trail. */
+  /**
+   * Bumps the version, takes the next sequence number, saves, records the change in the audit trail and
+   * lets the listeners of this kind of record act, all in the change's transaction.
+   */
   private async write(
     ctx: ChangeContext,
     handler: SyncHandler,
@@ -131,6 +135,9 @@ export class ChangeApplier {
       before: audit.before,
       after: audit.action === 'delete' ? null : handler.toData(row),
     });
+    for (const listener of this.listeners) {
+      if (listener.entity === handler.entity) await listener.afterWrite(ctx.manager, row, { isNew: audit.action === 'create' });
+    }
     return { changeId, status: 'applied', version: row.version };
   }
 }

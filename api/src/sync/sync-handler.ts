@@ -2,8 +2,8 @@ import type { EntityManager } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user';
 import type { SyncedRecord } from './synced-record';
 
-/** The kinds of record a client can pull; all but `decision` (written by the review routes) can be pushed too. */
-export const SYNC_ENTITIES = ['case', 'sample', 'handover', 'scan', 'note', 'instrumentCheck', 'escalation', 'attachment', 'decision'] as const;
+/** The kinds of record a client can pull; all but `decision` and `escalationNote` (written by the review and escalation routes) can be pushed too. */
+export const SYNC_ENTITIES = ['case', 'sample', 'handover', 'scan', 'note', 'instrumentCheck', 'escalation', 'attachment', 'decision', 'escalationNote'] as const;
 export type SyncEntityName = (typeof SYNC_ENTITIES)[number];
 
 /** A change the server refuses, with the reason the client shows next to the record. */
@@ -51,3 +51,15 @@ export interface SyncHandler<E extends SyncedRecord = SyncedRecord, D extends ob
    */
   assign(ctx: ChangeContext, row: E, data: D, target: { caseId: string; isNew: boolean }): void | Promise<void>;
 }
+
+/**
+ * Work that must commit or roll back with an applied change (e.g. the mails of a new escalation):
+ * called in the change's transaction after the row is saved. Provided under `SYNC_WRITE_LISTENERS`.
+ */
+export interface SyncWriteListener {
+  entity: SyncEntityName;
+  afterWrite(manager: EntityManager, row: SyncedRecord, change: { isNew: boolean }): Promise<void>;
+}
+
+/** Injection token of the `SyncWriteListener[]` the change applier calls. */
+export const SYNC_WRITE_LISTENERS = Symbol('SYNC_WRITE_LISTENERS');

@@ -49,7 +49,10 @@ async function serverConnection(database: DatabaseConfig): Promise<DataSource> {
  * Creates the database, runs the committed migrations (not synchronize), seeds the demo users and boots
  * the full AppModule with `configureApp`, exactly as `main.ts` does.
  */
-export async function startTestApp(options: { pwaDist?: string; env?: Record<string, string> } = {}): Promise<TestApp> {
+export async function startTestApp(
+  options: { pwaDist?: string; env?: Record<string, string>; sameDatabaseAs?: TestApp } = {},
+): Promise<TestApp> {
+  if (options.sameDatabaseAs) return startAnotherInstance(options.sameDatabaseAs, options.env);
   const base = loadDatabaseConfig(process.env);
   const database: DatabaseConfig = { ...base, name: `siteband_test_${randomBytes(6).toString('hex')}` };
   const server = await serverConnection(database);
@@ -88,19 +91,51 @@ export async function startTestApp(options: { pwaDist?: string; env?: Record<str
       CORS_ORIGIN: '',
       ...options.env,
     });
-    const moduleRef = await Test.createTestingModule({ imports: [AppModule] })
-      .overrideProvider(APP_CONFIG)
-      .useValue(config)
-      .compile();
-    app = moduleRef.createNestApplication<NestExpressApplication>({ logger: false });
-    configureApp(app);
-    await app.init();
+    app = await bootApp(config);
     const server$ = app.getHttpServer();
     return { app, config, database, dataSource, http: () => request(server$), close: cleanUp };
   } catch (error) {
     await cleanUp();
     throw error;
   }
+}
+
+async function bootApp(config: AppConfig): Promise<NestExpressApplication> {
+  const moduleRef = await Test.createTestingModule({ imports: [AppModule] })
+    .overrideProvider(APP_CONFIG)
+    .useValue(config)
+    .compile();
+  const app = moduleRef.createNestApplication<NestExpressApplication>({ logger: false });
+  configureApp(app);
+  await app.init();
+  return app;
+}
+
+/**
+ * A second API instance on the first one's database (same JWT secret, so tokens work on both), as
+ * behind a load balancer. Closing it stops only this instance; the first one drops the database.
+ */
+async function startAnotherInstance(first: TestApp, env: Record<string, string> = {}): Promise<TestApp> {
+  const config: AppConfig = loadConfig({
+    ...process.env,
+    NODE_ENV: 'test',
+    DB_HOST: first.database.host,
+    DB_PORT: String(first.database.port),
+    DB_NAME: first.database.name,
+    DB_USER: first.database.user,
+    DB_PASSWORD: first.database.password,
+    JWT_SECRET: first.config.jwt.secret,
+    SITEBAND_DATA_DIR: first.config.dataDir,
+    SITEBAND_DEMO_PASSWORD: DEMO_PASSWORD,
+    PWA_DIST: first.config.pwaDist,
+    LOG_LEVEL: 'silent',
+    PORT: '3000',
+    CORS_ORIGIN: '',
+    ...env,
+  });
+  const app = await bootApp(config);
+  const server$ = app.getHttpServer();
+  return { app, config, database: first.database, dataSource: first.dataSource, http: () => request(server$), close: () => app.close() };
 }
 
 /** Signs in and returns the tokens (fails the test on anything but 200). */

@@ -3,6 +3,7 @@ import { CreateFieldCaptureAndSync1796238800000 } from './1796238800000-CreateFi
 import { CreateLibraryEdits1796240000000 } from './1796240000000-CreateLibraryEdits';
 import { AddScanRecomputation1796250000000 } from './1796250000000-AddScanRecomputation';
 import { CreateReviewDecisions1796260000000 } from './1796260000000-CreateReviewDecisions';
+import { AddEscalationWorkflowAndMail1796270000000 } from './1796270000000-AddEscalationWorkflowAndMail';
 import { CreateAuditLog1796280000000 } from './1796280000000-CreateAuditLog';
 
 /** Every committed migration, oldest first (listed, not globbed, so sources and dist behave the same). */
@@ -12,5 +13,6 @@ export const MIGRATIONS = [
   CreateLibraryEdits1796240000000,
   AddScanRecomputation1796250000000,
   CreateReviewDecisions1796260000000,
+  AddEscalationWorkflowAndMail1796270000000,
   CreateAuditLog1796280000000,
 ];

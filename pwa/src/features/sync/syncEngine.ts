@@ -1,6 +1,6 @@
 import type { SitebandDb } from '../../db/db';
 import type { ApiClient } from '../api/client';
-import { backoffDelayMs, type BackoffOptions } from './backoff';
+import { backoffDelayMs, type BackoffOptions } from '@siteband/shared';
 import { pullChanges } from './pullChanges';
 import { pushOutbox } from './pushOutbox';
 import { uploadAttachments, type ByteSender } from './uploadAttachments';
