@@ -182,6 +182,18 @@ describe('escalations (e2e)', () => {
     expect(staleClose.status).toBe(409);
     const closed = await t.http().post(`/api/escalations/${ids.escalation}/close`).set(bearer('safety_officer')).send({ comment: 'Site cleared by the specialist team', baseVersion: 2 }).expect(200);
     expect(closed.body).toMatchObject({ version: 3, status: 'closed', closeComment: 'Site cleared by the specialist team', closedAt: expect.any(String) });
+    const audit: { entity: string; action: string; before: string | null; after: string }[] = await t.dataSource.query(
+      'SELECT entity, action, `before`, `after` FROM audit_log WHERE entityId = ? ORDER BY seq',
+      [ids.escalation],
+    );
+    expect(audit.map((entry) => [entry.entity, entry.action])).toEqual([
+      ['escalation', 'create'],
+      ['escalation', 'acknowledge'],
+      ['escalation', 'close'],
+    ]);
+    expect(JSON.parse(audit[1].before as string)).toMatchObject({ status: 'raised', acknowledgedBy: null });
+    expect(JSON.parse(audit[1].after)).toMatchObject({ status: 'acknowledged', actionTaken: 'ppe_required', ppeLevel: 'B' });
+    expect(JSON.parse(audit[2].after)).toMatchObject({ status: 'closed', closeComment: 'Site cleared by the specialist team' });
     const closedAgain = await t.http().post(`/api/escalations/${ids.escalation}/close`).set(bearer('safety_officer')).send({ comment: 'Again', baseVersion: 3 });
     expect(closedAgain.status).toBe(409);
     // The tablet cannot change it back: escalations are permanent records for sync.
@@ -214,6 +226,8 @@ describe('escalations (e2e)', () => {
     expect(elsewhere).toBeUndefined();
     const detail = await t.http().get(`/api/escalations/${ids.escalation}`).set(bearer('safety_officer')).expect(200);
     expect(detail.body.notes).toEqual([note.body]);
+    const [audited] = await t.dataSource.query('SELECT entity, action, actorRole FROM audit_log WHERE entityId = ?', [note.body.id]);
+    expect(audited).toEqual({ entity: 'escalationNote', action: 'create', actorRole: 'supervisor' });
 
     const [pushed] = await push(t, tokens.inspector, [upsert('escalationNote', randomUUID(), { escalationId: ids.escalation, caseId: ids.case, text: 'From the tablet' })]);
     expect(pushed).toMatchObject({ status: 'rejected', reason: 'A escalationNote is written by the server only: tablets pull it and never push it' });

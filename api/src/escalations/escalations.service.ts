@@ -1,10 +1,12 @@
 import { randomUUID } from 'node:crypto';
 import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { DataSource, In, IsNull, type EntityManager } from 'typeorm';
+import { AuditService } from '../audit/audit.service';
 import type { AuthenticatedUser } from '../auth/authenticated-user';
 import { whereCaseVisible } from '../cases/case-access';
 import { Case } from '../cases/case.entity';
 import { Escalation } from '../scans/escalation.entity';
+import { escalationSyncHandler } from '../scans/escalation.sync-handler';
 import { Scan } from '../scans/scan.entity';
 import { lockSyncCounter, takeSyncSeq } from '../sync/sync-sequence';
 import { User } from '../users/user.entity';
@@ -20,11 +22,18 @@ import type {
 } from './dto/escalation.dto';
 import { likelyCompoundNames } from './escalation-mail';
 import { EscalationNote } from './escalation-note.entity';
+import { escalationNoteRecordType } from './escalation-note.record-type';
 
-/** The safety officer's inbox: read, acknowledge, note and close escalations. Writes bump the version and sync sequence, so tablets pull them. */
+/**
+ * The safety officer's inbox: read, acknowledge, note and close escalations. Writes bump the version and
+ * sync sequence, so tablets pull them, and are recorded in the audit trail in the same transaction.
+ */
 @Injectable()
 export class EscalationsService {
-  constructor(private readonly dataSource: DataSource) {}
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly audit: AuditService,
+  ) {}
 
   /** Raised first, then acknowledged, then closed; newest arrival first within each. */
   async list(query: EscalationListQueryDto, user: AuthenticatedUser): Promise<EscalationListDto> {
@@ -72,7 +81,7 @@ export class EscalationsService {
     if (dto.actionTaken !== 'ppe_required' && dto.ppeLevel !== undefined) {
       throw new BadRequestException('ppeLevel goes with actionTaken ppe_required only');
     }
-    return this.change(id, dto.baseVersion, user, (row) => {
+    return this.change(id, dto.baseVersion, user, 'acknowledge', (row) => {
       if (row.status !== 'raised') throw new ConflictException(`This escalation is already ${row.status}`);
       row.status = 'acknowledged';
       row.acknowledgedBy = user.id;
@@ -87,7 +96,7 @@ export class EscalationsService {
 
   /** Acknowledged → closed. */
   close(id: string, dto: CloseEscalationDto, user: AuthenticatedUser): Promise<EscalationDetailDto> {
-    return this.change(id, dto.baseVersion, user, (row) => {
+    return this.change(id, dto.baseVersion, user, 'close', (row) => {
       if (row.status === 'raised') throw new ConflictException('Acknowledge this escalation before closing it');
       if (row.status === 'closed') throw new ConflictException('This escalation is already closed');
       row.status = 'closed';
@@ -116,6 +125,16 @@ export class EscalationsService {
         at: new Date(),
       });
       await manager.save(note);
+      await this.audit.record(manager, {
+        actorId: user.id,
+        actorRole: user.role,
+        entity: escalationNoteRecordType.entity,
+        entityId: note.id,
+        caseId: note.caseId,
+        action: 'create',
+        before: null,
+        after: escalationNoteRecordType.toData(note),
+      });
       return noteDto(note);
     });
   }
@@ -124,7 +143,13 @@ export class EscalationsService {
    * Locks the sync counter (as every synced write does, first), then the escalation row; checks the
    * version the user saw; applies the change; bumps version and sync sequence.
    */
-  private change(id: string, baseVersion: number, user: AuthenticatedUser, apply: (row: Escalation) => void): Promise<EscalationDetailDto> {
+  private change(
+    id: string,
+    baseVersion: number,
+    user: AuthenticatedUser,
+    action: 'acknowledge' | 'close',
+    apply: (row: Escalation) => void,
+  ): Promise<EscalationDetailDto> {
     return this.dataSource.transaction(async (manager) => {
       const counter = await lockSyncCounter(manager);
       await this.visible(manager, id, user);
@@ -132,10 +157,21 @@ export class EscalationsService {
       if (row.version !== baseVersion) {
         throw new ConflictException(`The escalation is at version ${row.version}, not ${baseVersion}: someone changed it; reload and try again`);
       }
+      const before = structuredClone(escalationSyncHandler.toData(row));
       apply(row);
       row.version += 1;
       row.syncSeq = await takeSyncSeq(manager, counter);
       await manager.save(row);
+      await this.audit.record(manager, {
+        actorId: user.id,
+        actorRole: user.role,
+        entity: escalationSyncHandler.entity,
+        entityId: row.id,
+        caseId: row.caseId,
+        action,
+        before,
+        after: escalationSyncHandler.toData(row),
+      });
       return this.detail(id, user, manager);
     });
   }

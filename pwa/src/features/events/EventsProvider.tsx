@@ -1,11 +1,11 @@
 import { createContext, useCallback, useContext, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
 import { useQueryClient } from '@tanstack/react-query';
+import { backoffDelayMs } from '@siteband/shared';
 import { useTranslation } from 'react-i18next';
 import { useNavigate } from 'react-router-dom';
 import { useApiClient } from '../api/ApiClientContext';
 import { useOnlineStatus } from '../network/onlineStatus';
 import { useSession } from '../session/SessionProvider';
-import { backoffDelayMs } from '../sync/backoff';
 import { streamEvents } from './eventsApi';
 import { LIVE_QUERY_ROOTS, type LiveEvent } from './liveEvent';
 import { followsLiveEvents, notificationFor, notificationsAllowed } from './notifications';
