@@ -22,7 +22,7 @@ import type {
 } from './dto/escalation.dto';
 import { likelyCompoundNames } from './escalation-mail';
 import { EscalationNote } from './escalation-note.entity';
-import { escalationNoteRecordType } from './escalation-note.record-type';
+import { escalationNotePull } from './escalation-note.pull';
 
 /**
  * The safety officer's inbox: read, acknowledge, note and close escalations. Writes bump the version and
@@ -128,12 +128,12 @@ export class EscalationsService {
       await this.audit.record(manager, {
         actorId: user.id,
         actorRole: user.role,
-        entity: escalationNoteRecordType.entity,
+        entity: escalationNotePull.entity,
         entityId: note.id,
         caseId: note.caseId,
         action: 'create',
         before: null,
-        after: escalationNoteRecordType.toData(note),
+        after: escalationNotePull.toData(note),
       });
       return noteDto(note);
     });

@@ -5,7 +5,7 @@ import { caseSyncHandler } from '../cases/case.sync-handler';
 import { siteNoteSyncHandler } from '../notes/site-note.sync-handler';
 import { handoverSyncHandler } from '../samples/handover.sync-handler';
 import { sampleSyncHandler } from '../samples/sample.sync-handler';
-import { escalationNoteRecordType } from '../escalations/escalation-note.record-type';
+import { escalationNotePull } from '../escalations/escalation-note.pull';
 import { escalationSyncHandler } from '../scans/escalation.sync-handler';
 import { instrumentCheckSyncHandler } from '../scans/instrument-check.sync-handler';
 import { scanSyncHandler } from '../scans/scan.sync-handler';
@@ -24,7 +24,7 @@ const HANDLERS = [
 ] satisfies SyncHandler[] as SyncHandler[];
 
 /** Records only the server writes: pulled, never pushed. */
-const PULL_ONLY = [decisionPull, escalationNoteRecordType] satisfies PulledKind[] as PulledKind[];
+const PULL_ONLY = [decisionPull, escalationNotePull] satisfies PulledKind[] as PulledKind[];
 
 /** Everything a pull reads. */
 const PULLED: readonly PulledKind[] = [...HANDLERS, ...PULL_ONLY];
@@ -39,7 +39,7 @@ export class SyncRegistry {
     const handler = this.byEntity.get(entity);
     if (handler) return handler;
     if (PULL_ONLY.some((kind) => kind.entity === entity)) {
-      throw new ChangeRejected(`A ${entity} is written by the server only: tablets pull it and never push it`);
+      throw new ChangeRejected(`${entity} records are written by the server only: tablets pull them and never push them`);
     }
     throw new Error(`No sync handler for ${entity}`);
   }

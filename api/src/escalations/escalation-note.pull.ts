@@ -2,7 +2,7 @@ import type { PulledKind } from '../sync/sync-handler';
 import { EscalationNote } from './escalation-note.entity';
 
 /** Escalation notes in pulls (entity `escalationNote`); they are written through the escalations routes, never pushed. */
-export const escalationNoteRecordType: PulledKind<EscalationNote> = {
+export const escalationNotePull: PulledKind<EscalationNote> = {
   entity: 'escalationNote',
   target: EscalationNote,
   caseColumn: 'caseId',
