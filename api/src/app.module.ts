@@ -9,6 +9,7 @@ import type { AppConfig } from './config/app-config';
 import { APP_CONFIG, AppConfigModule } from './config/config.module';
 import { buildDataSourceOptions } from './database/data-source-options';
 import { EscalationsModule } from './escalations/escalations.module';
+import { EventsModule } from './events/events.module';
 import { HealthModule } from './health/health.module';
 import { IdentifyModule } from './identify/identify.module';
 import { LibraryModule } from './library/library.module';
@@ -38,6 +39,7 @@ import { UsersModule } from './users/users.module';
     CaseArchivesModule,
     SyncModule,
     EscalationsModule,
+    EventsModule,
     AttachmentsModule,
     LibraryModule,
     IdentifyModule,
