@@ -3,9 +3,11 @@ import react from '@vitejs/plugin-react';
 import { VitePWA } from 'vite-plugin-pwa';
 import { webManifest } from './pwa-manifest.ts';
 import { parseOfflineSessionHours } from './src/config/offlineSessionHours.ts';
+import { parseIdleLockMinutes } from './src/config/idleLockMinutes.ts';
 
-// Fail the build, not the tablet, when the offline period is mistyped.
+// Fail the build, not the tablet, when the offline period or the idle time is mistyped.
 parseOfflineSessionHours(process.env.VITE_OFFLINE_SESSION_HOURS);
+parseIdleLockMinutes(process.env.VITE_IDLE_LOCK_MINUTES);
 
 const IONIC_COMPONENTS = /node_modules\/@ionic\/core\/components\/.*\.js$/;
 

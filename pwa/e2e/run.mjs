@@ -7,6 +7,7 @@ import { blockingViolations } from './axe.mjs';
 import { captureTests } from './capture.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
 import { identifyTests } from './identify.mjs';
+import { idleLockTests } from './idleLock.mjs';
 import { libraryTests } from './library.mjs';
 import { reviewTests } from './review.mjs';
 import {
@@ -294,3 +295,4 @@ libraryTests({ baseUrl: BASE_URL, password: PASSWORD });
 captureTests({ baseUrl: BASE_URL, password: PASSWORD });
 adminTests({ baseUrl: BASE_URL, password: PASSWORD });
 reviewTests({ baseUrl: BASE_URL, password: PASSWORD });
+idleLockTests({ baseUrl: BASE_URL, password: PASSWORD });

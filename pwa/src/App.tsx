@@ -4,8 +4,10 @@ import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
 import { useEffect, type ReactNode } from 'react';
 import { Navigate, Route } from 'react-router-dom';
 import { lazyPage } from './components/lazyPage';
+import { IdleLockScreen } from './components/lock/LockScreen';
 import { ApiClientProvider } from './features/api/ApiClientContext';
 import type { ApiClient } from './features/api/client';
+import { IdleLockProvider } from './features/lock/IdleLockProvider';
 import { homePathForRole } from './features/navigation/roleTabs';
 import { SessionProvider, useSession } from './features/session/SessionProvider';
 import type { SessionStore } from './features/session/sessionStore';
@@ -39,31 +41,36 @@ export interface AppProps {
   apiClient: ApiClient;
   sessionStore: SessionStore;
   offlineSessionHours: number;
+  /** Minutes untouched before the app locks, unless changed on this tablet. */
+  idleLockMinutes: number;
 }
 
 /** The whole app: server data, API client, session, then the routes. */
-export function App({ queryClient, apiClient, sessionStore, offlineSessionHours }: AppProps) {
+export function App({ queryClient, apiClient, sessionStore, offlineSessionHours, idleLockMinutes }: AppProps) {
   return (
     <QueryClientProvider client={queryClient}>
       <ApiClientProvider client={apiClient}>
         <SessionProvider store={sessionStore} offlineSessionHours={offlineSessionHours}>
-          <IonApp>
-            <IonReactRouter>
-              <IonRouterOutlet>
-                <Route path="/signin" element={<SignInPage />} />
-                <Route
-                  path="/tabs/*"
-                  element={
-                    <RequireSession>
-                      <TabsLayout />
-                    </RequireSession>
-                  }
-                />
-                <Route path="/" element={<HomeRedirect />} />
-                <Route path="*" element={<HomeRedirect />} />
-              </IonRouterOutlet>
-            </IonReactRouter>
-          </IonApp>
+          <IdleLockProvider defaultIdleMinutes={idleLockMinutes}>
+            <IonApp>
+              <IonReactRouter>
+                <IonRouterOutlet>
+                  <Route path="/signin" element={<SignInPage />} />
+                  <Route
+                    path="/tabs/*"
+                    element={
+                      <RequireSession>
+                        <TabsLayout />
+                      </RequireSession>
+                    }
+                  />
+                  <Route path="/" element={<HomeRedirect />} />
+                  <Route path="*" element={<HomeRedirect />} />
+                </IonRouterOutlet>
+              </IonReactRouter>
+            </IonApp>
+            <IdleLockScreen />
+          </IdleLockProvider>
         </SessionProvider>
       </ApiClientProvider>
     </QueryClientProvider>

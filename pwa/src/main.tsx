@@ -40,6 +40,7 @@ async function start(): Promise<void> {
         apiClient={apiClient}
         sessionStore={sessionStore}
         offlineSessionHours={appConfig.offlineSessionHours}
+        idleLockMinutes={appConfig.idleLockMinutes}
       />
     </StrictMode>,
   );

@@ -5,6 +5,7 @@ import { useTranslation } from 'react-i18next';
 import { PageShell } from '../components/PageShell';
 import { ThemeChooser } from '../components/ThemeChooser';
 import { LanguageChooser } from '../components/LanguageChooser';
+import { IdleLockSettings } from '../components/lock/IdleLockSettings';
 import { useOnlineStatus } from '../features/network/onlineStatus';
 import { useSession } from '../features/session/SessionProvider';
 import { formatDateTime, formatHours } from '../i18n/format';
@@ -57,6 +58,8 @@ export default function AccountPage() {
           <dd data-testid="offline-until">{offlineUntil === undefined ? '' : formatDateTime(offlineUntil, language)}</dd>
         </dl>
       </section>
+
+      <IdleLockSettings />
 
       {session.user.role !== 'supervisor' && (
         // Supervisors have these in their own tab; everyone else may consult them read-only.

@@ -5,6 +5,8 @@ import { ApiError } from '../api/apiError';
 import { captureDb } from '../cases/captureDb';
 import { useOnlineStatus } from '../network/onlineStatus';
 import { clearCaptureDataIfSynced, UnsyncedWorkError } from '../sync/clearCaptureData';
+import { lockStore } from '../lock/lockStore';
+import { createVerifier } from '../lock/secretVerifier';
 import { notifySignOutBlocked } from '../sync/signOutBlocked';
 import { login, logout, meQuery } from './authApi';
 import { offlineSessionEndsAt, sessionStatus, type SessionStatus } from './offlineGrace';
@@ -53,6 +55,8 @@ export function SessionProvider({ store, offlineSessionHours, children }: { stor
   const signIn = useCallback(
     async (credentials: Credentials) => {
       const auth = await login(client, credentials);
+      // Only a verifier of the accepted password is kept, so the idle lock can check it offline.
+      lockStore().signedIn(auth.user.id, await createVerifier(credentials.password), Date.now());
       queryClient.clear();
       return store.save(auth);
     },
@@ -75,6 +79,7 @@ export function SessionProvider({ store, offlineSessionHours, children }: { stor
       if (!(error instanceof ApiError)) throw error;
     } finally {
       await store.clear();
+      lockStore().signedOut();
       queryClient.clear();
     }
   }, [client, queryClient, store]);
