@@ -11,6 +11,8 @@ export DB_PASSWORD="${DB_PASSWORD:-siteband-local}"
 export SITEBAND_DATA_DIR="${SITEBAND_DATA_DIR:-$ROOT/.data}"
 export S3_PORT="${S3_PORT:-4569}"
 export S3_BUCKET="${S3_BUCKET:-siteband-dev}"
+export SMTP_PORT="${SMTP_PORT:-2525}"
+export SMTP_WEB_PORT="${SMTP_WEB_PORT:-$((SMTP_PORT + 1))}"
 export SITEBAND_DEMO_PASSWORD="${SITEBAND_DEMO_PASSWORD:-siteband-demo-2026}"
 export MARIADB_DIR="${MARIADB_DIR:-$SITEBAND_DATA_DIR/mariadb-$DB_PORT}"
 
@@ -26,6 +28,22 @@ start_s3_fake() {
     sleep 0.1
   done
   echo "The S3 fake did not start; see $log" >&2
+  cat "$log" >&2
+  return 1
+}
+
+# Starts the local SMTP fake on $SMTP_PORT (inbox on $SMTP_WEB_PORT) in the background and waits for it; sets smtp_pid.
+start_smtp_fake() {
+  local log="$SITEBAND_DATA_DIR/smtp-$SMTP_PORT.log"
+  mkdir -p "$SITEBAND_DATA_DIR"
+  node "$ROOT/scripts/fakes/smtp.mjs" --port "$SMTP_PORT" --web-port "$SMTP_WEB_PORT" >"$log" 2>&1 &
+  smtp_pid=$!
+  for _ in $(seq 1 100); do
+    grep -q "ready" "$log" 2>/dev/null && return 0
+    kill -0 "$smtp_pid" 2>/dev/null || break
+    sleep 0.1
+  done
+  echo "The SMTP fake did not start; see $log" >&2
   cat "$log" >&2
   return 1
 }

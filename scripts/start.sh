@@ -11,15 +11,18 @@ started_db=0
 if ! bash scripts/db.sh status >/dev/null 2>&1; then bash scripts/db.sh start; started_db=1; fi
 api_pid=""
 s3_pid=""
+smtp_pid=""
 cleanup() {
   trap - INT TERM EXIT
   if [ -n "$s3_pid" ]; then kill "$s3_pid" 2>/dev/null || true; wait "$s3_pid" 2>/dev/null || true; fi
+  if [ -n "$smtp_pid" ]; then kill "$smtp_pid" 2>/dev/null || true; wait "$smtp_pid" 2>/dev/null || true; fi
   if [ -n "$api_pid" ]; then kill "$api_pid" 2>/dev/null || true; wait "$api_pid" 2>/dev/null || true; fi
   if [ "$started_db" = 1 ]; then bash scripts/db.sh stop; fi
 }
 trap cleanup INT TERM EXIT
 
 start_s3_fake
+start_smtp_fake
 npm run -s migration:run -w api
 npm run -s seed -w api
 
@@ -36,6 +39,7 @@ cat <<MSG
   Siteband is running at http://127.0.0.1:$PORT
   API documentation:      http://127.0.0.1:$PORT/api/docs
   Object storage (fake):  http://127.0.0.1:$S3_PORT  bucket $S3_BUCKET, files in .data/s3-$S3_PORT
+  Mail inbox (fake SMTP): http://127.0.0.1:$SMTP_WEB_PORT  every mail the app sends, also in .data/mail/$SMTP_PORT
 
   Demo sign-ins (password: $SITEBAND_DEMO_PASSWORD)
     inspector@demo.test    inspector

@@ -10,9 +10,11 @@ started_db=0
 if ! bash scripts/db.sh status >/dev/null 2>&1; then bash scripts/db.sh start || exit 1; started_db=1; fi
 server_pid=""
 s3_pid=""
+smtp_pid=""
 e2e_db="siteband_e2e_$$"
 cleanup() {
   if [ -n "$s3_pid" ]; then kill "$s3_pid" 2>/dev/null; wait "$s3_pid" 2>/dev/null; fi
+  if [ -n "$smtp_pid" ]; then kill "$smtp_pid" 2>/dev/null; wait "$smtp_pid" 2>/dev/null; fi
   if [ -n "$server_pid" ]; then kill "$server_pid" 2>/dev/null; wait "$server_pid" 2>/dev/null; fi
   bash scripts/db.sh sql "DROP DATABASE IF EXISTS \`$e2e_db\`" >/dev/null 2>&1
   if [ "$started_db" = 1 ]; then bash scripts/db.sh stop >/dev/null; fi
@@ -31,9 +33,11 @@ suite() {
 browser_e2e() {
   # A throwaway database and server on a free port, the way a user's npm start would run it.
   local port="${E2E_PORT:-$((PORT + 900))}"
-  local S3_PORT="$((S3_PORT + 900))"
-  export S3_PORT
+  local S3_PORT="$((S3_PORT + 900))" SMTP_PORT="$((SMTP_PORT + 900))" SMTP_WEB_PORT="$((SMTP_WEB_PORT + 900))"
+  export S3_PORT SMTP_PORT SMTP_WEB_PORT
   start_s3_fake || return 1
+  rm -rf "$SITEBAND_DATA_DIR/mail/$SMTP_PORT"
+  start_smtp_fake || return 1
   bash scripts/db.sh sql "CREATE DATABASE \`$e2e_db\` CHARACTER SET utf8mb4" || return 1
   DB_NAME="$e2e_db" npm run -s migration:run -w api || return 1
   DB_NAME="$e2e_db" npm run -s seed -w api || return 1
