@@ -455,6 +455,23 @@ describe('Review: decisions, the queue, its CSV and the case bundle (e2e)', () =
       expect(escalatedOnly.every((row) => row.highestHazard === 'escalation')).toBe(true);
       expect(escalatedOnly.map((row) => row.caseId)).toContain(made[2].caseId);
     });
+    it('shows escalation notes in the bundle; a closed escalation no longer counts as open nor raises the hazard', async () => {
+      const escalated = made[2];
+      const bundleOf = async () => (await t.http().get(`/api/review/cases/${escalated.caseId}`).set(auth(tokens.supervisor)).expect(200)).body;
+      const [escalation] = (await bundleOf()).escalations;
+      expect(escalation.notes).toEqual([]);
+      const safety = auth(tokens.safety_officer);
+      await t.http().post(`/api/escalations/${escalation.id}/notes`).set(safety).send({ text: 'Harbour master informed (demo)' }).expect(201);
+      const withNote = (await bundleOf()).escalations[0];
+      expect(withNote.notes).toEqual([expect.objectContaining({ escalationId: escalation.id, caseId: escalated.caseId, text: 'Harbour master informed (demo)', authorName: expect.any(String) })]);
+
+      const ack = await t.http().post(`/api/escalations/${escalation.id}/acknowledge`).set(safety).send({ actionTaken: 'no_action', baseVersion: escalation.version }).expect(200);
+      const acknowledged = (await queue({ pageSize: 100 }).expect(200)).body.items.find((item: { caseId: string }) => item.caseId === escalated.caseId);
+      expect(acknowledged).toMatchObject({ openEscalations: 1, highestHazard: { rank: 3 } });
+      await t.http().post(`/api/escalations/${escalation.id}/close`).set(safety).send({ comment: 'No hazard found on re-check (demo)', baseVersion: ack.body.version }).expect(200);
+      const closed = (await queue({ pageSize: 100 }).expect(200)).body.items.find((item: { caseId: string }) => item.caseId === escalated.caseId);
+      expect(closed).toMatchObject({ openEscalations: 0, highestHazard: { rank: expectedRank({ ...escalated, n: -1 }) } });
+    });
   });
 
   describe('role matrix', () => {

@@ -7,6 +7,8 @@ import { Case, type CaseStatus } from '../cases/case.entity';
 import { caseSyncHandler } from '../cases/case.sync-handler';
 import { CasesService } from '../cases/cases.service';
 import type { FlatRecord } from '../cases/dto/case-list.dto';
+import { EscalationNote } from '../escalations/escalation-note.entity';
+import { escalationNotePull } from '../escalations/escalation-note.pull';
 import { LibraryService } from '../library/library.service';
 import { Scan } from '../scans/scan.entity';
 import { lockSyncCounter, takeSyncSeq } from '../sync/sync-sequence';
@@ -111,16 +113,21 @@ export class ReviewService {
     });
   }
 
-  /** The case with samples (and their hand-overs), scans, notes, attachments, escalations and every decision. */
+  /** The case with samples (and their hand-overs), scans, notes, attachments, escalations (and their notes) and every decision. */
   async bundle(caseId: string, user: AuthenticatedUser): Promise<CaseBundleDto> {
     const detail = await this.cases.detail(caseId, user);
     const decisions = (await this.dataSource.getRepository(ReviewDecision).find({ where: { caseId }, order: { revision: 'ASC' } })).map(decisionDto);
     const current: Record<string, DecisionDto> = {};
     for (const decision of decisions) if (decision.scanId) current[decision.scanId] = decision;
+    const notes = await this.dataSource.getRepository(EscalationNote).find({ where: { caseId }, order: { at: 'ASC', id: 'ASC' } });
     const { handovers, ...rest } = detail;
     return {
       ...rest,
       samples: detail.samples.map((sample) => ({ ...sample, handovers: handovers.filter((handover: FlatRecord) => handover.sampleId === sample.id) })),
+      escalations: detail.escalations.map((escalation) => ({
+        ...escalation,
+        notes: notes.filter((note) => note.escalationId === escalation.id).map((note) => ({ id: note.id, ...escalationNotePull.toData(note) })),
+      })),
       decisions,
       currentDecisions: current,
     };

@@ -19,7 +19,7 @@ export class CaseBundleDto {
   @ApiProperty({ type: Object, isArray: true })
   notes: FlatRecord[];
 
-  @ApiProperty({ type: Object, isArray: true })
+  @ApiProperty({ type: Object, isArray: true, description: 'Escalations, each with its notes (oldest first) as `notes`' })
   escalations: FlatRecord[];
 
   @ApiProperty({ type: Object, isArray: true, description: 'Attachment metadata (bytes through /api/attachments/:id/content)' })
