@@ -5,7 +5,7 @@ import { ConfigError, loadConfig } from './app-config';
 
 const STRONG = 'kQ7v2x9LpZ4mR8tW1yB6nC3dF5gH0jS-aE_uI';
 
-describe('mail, escalation timer and invitation configuration', () => {
+describe('mail and escalation timer configuration', () => {
   let dataDir: string;
   beforeEach(() => {
     dataDir = mkdtempSync(join(tmpdir(), 'siteband-mail-config-'));
@@ -36,7 +36,6 @@ describe('mail, escalation timer and invitation configuration', () => {
       retryMaxSeconds: 3600,
     });
     expect(config.escalationTimers).toEqual({ renotifyAfterSeconds: 900, secondContact: undefined, secondContactAfterSeconds: 1800 });
-    expect(config.invite).toEqual({ ttlSeconds: 72 * 3600 });
   });
 
   it('reads every variable it documents', () => {
@@ -53,7 +52,6 @@ describe('mail, escalation timer and invitation configuration', () => {
       ESCALATION_RENOTIFY_AFTER: '5m',
       ESCALATION_SECOND_CONTACT: ' Duty.Manager@Example.org ',
       ESCALATION_SECOND_CONTACT_AFTER: '20 min',
-      INVITE_TTL: '1d',
     });
     expect(config.mail).toEqual({
       smtpHost: 'relay.example',
@@ -66,7 +64,6 @@ describe('mail, escalation timer and invitation configuration', () => {
       retryMaxSeconds: 600,
     });
     expect(config.escalationTimers).toEqual({ renotifyAfterSeconds: 300, secondContact: 'duty.manager@example.org', secondContactAfterSeconds: 1200 });
-    expect(config.invite.ttlSeconds).toBe(86400);
   });
 
   it('lists every bad value at once', () => {
@@ -79,17 +76,17 @@ describe('mail, escalation timer and invitation configuration', () => {
         MAIL_RETRY_BASE: '2h',
         ESCALATION_RENOTIFY_AFTER: 'soon',
         ESCALATION_SECOND_CONTACT: 'not-an-address',
-        INVITE_TTL: '0',
+        MAIL_POLL_INTERVAL: '0',
       }),
     ).toEqual([
       'SMTP_PORT must be a whole number from 1 to 65535, got "0"',
       'SMTP_USER and SMTP_PASSWORD go together: set both or neither',
       'SMTP_FROM must be an address like "Siteband <alerts@example.org>", got "nobody"',
       'APP_PUBLIC_URL must be an http(s) URL, got "ftp://x"',
+      'MAIL_POLL_INTERVAL: "0" must be a positive duration',
       'MAIL_RETRY_BASE must not be longer than MAIL_RETRY_MAX',
       'ESCALATION_RENOTIFY_AFTER: "soon" is not a duration (examples: 900, 15m, 15 min, 12h, 30d)',
       'ESCALATION_SECOND_CONTACT must be an e-mail address, got "not-an-address"',
-      'INVITE_TTL: "0" must be a positive duration',
     ]);
   });
 
