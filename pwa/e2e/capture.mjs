@@ -9,7 +9,7 @@ import { deflateSync } from 'node:zlib';
 import { after, before, describe, it } from 'node:test';
 import { blockingViolations } from './axe.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
-import { openTab, signInTo, signOut, waitForPage, waitForServiceWorker } from './shell.mjs';
+import { apiToken, goOffline, openTab, signInTo, signOut, waitForPage } from './shell.mjs';
 
 const SPECTRA = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'fixtures', 'spectra');
 const SITE = `Harbour shed 7 (e2e ${Date.now() % 100000})`;
@@ -28,7 +28,7 @@ function crc32(bytes) {
 }
 
 /** A small RGB PNG with a colour gradient, so each generated photo has different bytes. */
-function gradientPng(width, height, tint) {
+export function gradientPng(width, height, tint) {
   const chunk = (type, data) => {
     const head = Buffer.alloc(8);
     head.writeUInt32BE(data.length, 0);
@@ -52,7 +52,7 @@ function gradientPng(width, height, tint) {
 }
 
 /** Runs inside the page: the capture tables read straight from IndexedDB, not through the app's code. */
-function readCapture() {
+export function readCapture() {
   return new Promise((resolve, reject) => {
     const open = indexedDB.open('siteband');
     open.onerror = () => reject(open.error);
@@ -76,7 +76,7 @@ function readCapture() {
 }
 
 /** Waits until the outbox is empty and every photo's bytes are verified by the server (up to 30 s). */
-async function waitForSynced(page) {
+export async function waitForSynced(page) {
   for (let attempt = 0; attempt < 150; attempt += 1) {
     const local = await page.evaluate(readCapture);
     if (local.outbox.length === 0 && local.photos.every((p) => p.uploadedAt)) return local;
@@ -98,13 +98,7 @@ export function captureTests({ baseUrl, password }) {
     let caseId;
     before(async () => {
       browser = await openBrowser({ origin: baseUrl, width: 800, height: 1280 });
-      const login = await fetch(`${baseUrl}/api/auth/login`, {
-        method: 'POST',
-        headers: { 'Content-Type': 'application/json' },
-        body: JSON.stringify({ email: 'inspector@demo.test', password }),
-      });
-      assert.equal(login.status, 200);
-      token = (await login.json()).accessToken;
+      token = await apiToken(baseUrl, 'inspector@demo.test', password);
     });
     after(async () => {
       await browser?.close();
@@ -113,9 +107,7 @@ export function captureTests({ baseUrl, password }) {
     it('records a case, a sample with two photos, site notes and a hand-over offline, and keeps them over a reload', async () => {
       const { page, context } = browser;
       await signInTo(page, baseUrl, 'inspector@demo.test', password, 'Cases');
-      await waitForServiceWorker(page);
-      await context.setOffline(true);
-      await page.getByTestId('connection-status').filter({ visible: true }).filter({ hasText: 'Offline' }).waitFor();
+      await goOffline(page, context);
 
       await page.getByTestId('new-case').filter({ visible: true }).click();
       await waitForPage(page, 'New case');

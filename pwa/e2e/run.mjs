@@ -5,6 +5,7 @@ import { after, before, describe, it } from 'node:test';
 import { adminTests } from './admin.mjs';
 import { blockingViolations } from './axe.mjs';
 import { captureTests } from './capture.mjs';
+import { caseArchiveTests } from './caseArchive.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
 import { identifyTests } from './identify.mjs';
 import { idleLockTests } from './idleLock.mjs';
@@ -293,6 +294,7 @@ describe('offline', { concurrency: false }, () => {
 identifyTests({ baseUrl: BASE_URL, password: PASSWORD });
 libraryTests({ baseUrl: BASE_URL, password: PASSWORD });
 captureTests({ baseUrl: BASE_URL, password: PASSWORD });
+caseArchiveTests({ baseUrl: BASE_URL, password: PASSWORD });
 adminTests({ baseUrl: BASE_URL, password: PASSWORD });
 reviewTests({ baseUrl: BASE_URL, password: PASSWORD });
 idleLockTests({ baseUrl: BASE_URL, password: PASSWORD });

@@ -119,3 +119,21 @@ export async function waitForPage(page, title) {
 export async function waitForServiceWorker(page) {
   await page.waitForFunction(() => navigator.serviceWorker?.controller != null, undefined, { timeout: 20_000 });
 }
+
+/** An access token for calls straight to the API (fails the test on anything but 200). */
+export async function apiToken(baseUrl, email, password) {
+  const login = await fetch(`${baseUrl}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ email, password }),
+  });
+  if (login.status !== 200) throw new Error(`sign-in of ${email} through the API answered ${login.status}`);
+  return (await login.json()).accessToken;
+}
+
+/** Takes the browser offline after the service worker controls the page, and waits for the app to say so. */
+export async function goOffline(page, context) {
+  await waitForServiceWorker(page);
+  await context.setOffline(true);
+  await page.getByTestId('connection-status').filter({ visible: true }).filter({ hasText: 'Offline' }).waitFor();
+}

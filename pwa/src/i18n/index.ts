@@ -4,6 +4,7 @@ import en from './en.json';
 import identify from './en/identify.json';
 import library from './en/library.json';
 import capture from './en/capture.json';
+import caseArchive from './en/caseArchive.json';
 import events from './en/events.json';
 import escalations from './en/escalations.json';
 import caseOutcome from './en/case-outcome.json';
@@ -25,7 +26,7 @@ function storedLanguage(): Language {
 /** Starts i18next with every bundled resource (no network loading: the app must work offline). */
 export async function initI18n(): Promise<typeof i18next> {
   await i18next.use(initReactI18next).init({
-    resources: { en: { translation: { ...en, identify, library, capture, events, escalations, caseOutcome, audit, review, lock } } },
+    resources: { en: { translation: { ...en, identify, library, capture, events, escalations, caseOutcome, audit, review, lock, caseArchive } } },
     lng: storedLanguage(),
     fallbackLng: 'en',
     interpolation: { escapeValue: false },

@@ -2,6 +2,7 @@ import { IonButton, IonIcon } from '@ionic/react';
 import { addOutline, createOutline } from 'ionicons/icons';
 import { useTranslation } from 'react-i18next';
 import { useParams } from 'react-router-dom';
+import { CaseExportButton } from '../components/caseArchive/CaseExportButton';
 import { CaseFacts } from '../components/cases/CaseFacts';
 import { ConflictPanel } from '../components/cases/ConflictPanel';
 import { NotesPanel } from '../components/cases/NotesPanel';
@@ -69,6 +70,7 @@ export default function CasePage() {
               {nextLabel}
             </IonButton>
           )}
+          <CaseExportButton caseId={id} />
         </div>
         {row.data.status === 'submitted' && <p className="sb-muted">{t('capture.case.frozen')}</p>}
       </section>

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { IonButton, IonIcon, IonList } from '@ionic/react';
 import { addOutline } from 'ionicons/icons';
 import { useTranslation } from 'react-i18next';
+import { CaseImportPanel } from '../components/caseArchive/CaseImportPanel';
 import { CaseCard } from '../components/cases/CaseCard';
 import { CaseFilters } from '../components/cases/CaseFilters';
 import { StorageMeter } from '../components/cases/StorageMeter';
@@ -41,6 +42,7 @@ export default function CasesPage() {
           ))}
         </IonList>
       </section>
+      <CaseImportPanel />
       <section className="sb-panel" aria-labelledby="storage-heading">
         <h2 id="storage-heading" className="sb-panel__heading">
           {t('capture.storage.heading')}

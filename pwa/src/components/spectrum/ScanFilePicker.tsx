@@ -13,8 +13,8 @@ async function readScanFile(file: File): Promise<ScanFile> {
   return { name: file.name, bytes: await file.arrayBuffer() };
 }
 
-/** A large file picker that also takes a dropped file; the reading itself happens in the worker. */
-export function ScanFilePicker({ label, hint, onFile, testId }: { label: string; hint: string; onFile: (file: ScanFile) => void; testId: string }) {
+/** A large file picker that also takes a dropped file (instrument files unless `accept` says otherwise); the reading itself happens in the worker. */
+export function ScanFilePicker({ label, hint, onFile, testId, accept = ACCEPT }: { label: string; hint: string; onFile: (file: ScanFile) => void; testId: string; accept?: string }) {
   const { t } = useTranslation();
   const inputId = useId();
   const [dragging, setDragging] = useState(false);
@@ -49,7 +49,7 @@ export function ScanFilePicker({ label, hint, onFile, testId }: { label: string;
         id={inputId}
         className="sb-visually-hidden"
         type="file"
-        accept={ACCEPT}
+        accept={accept}
         data-testid={testId}
         onChange={(e) => {
           void take(e.target.files);
