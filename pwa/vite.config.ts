@@ -31,6 +31,8 @@ export default defineConfig({
         navigateFallbackDenylist: [/^\/api\//],
         // Ionic's chunk is above workbox's 2 MiB default once unminified source maps are excluded.
         maximumFileSizeToCacheInBytes: 4 * 1024 * 1024,
+        // Files shared from another app arrive as a POST the generated worker does not route (public/share-target-sw.js).
+        importScripts: ['/share-target-sw.js'],
       },
     }),
   ],

@@ -11,6 +11,7 @@ import { identifyTests } from './identify.mjs';
 import { idleLockTests } from './idleLock.mjs';
 import { libraryTests } from './library.mjs';
 import { reviewTests } from './review.mjs';
+import { shareTargetTests } from './shareTarget.mjs';
 import {
   ageStoredSession,
   openTab,
@@ -298,3 +299,4 @@ caseArchiveTests({ baseUrl: BASE_URL, password: PASSWORD });
 adminTests({ baseUrl: BASE_URL, password: PASSWORD });
 reviewTests({ baseUrl: BASE_URL, password: PASSWORD });
 idleLockTests({ baseUrl: BASE_URL, password: PASSWORD });
+shareTargetTests({ baseUrl: BASE_URL, password: PASSWORD });

@@ -29,7 +29,14 @@ export interface AcknowledgedScan {
  * compounds. `afterAcknowledge` renders under an acknowledged result (a sample's save action);
  * on the Capture tab alone the acknowledgement lives only on this screen.
  */
-export function ScanCapture({ afterAcknowledge }: { afterAcknowledge?: (scan: AcknowledgedScan) => ReactNode }) {
+export function ScanCapture({
+  afterAcknowledge,
+  sharedFile,
+}: {
+  afterAcknowledge?: (scan: AcknowledgedScan) => ReactNode;
+  /** A file shared from another app, imported as soon as it is read, exactly as if it had been picked. */
+  sharedFile?: ScanFile;
+}) {
   const { t } = useTranslation();
   const [scan, setScan] = useState<ScanSettings>(DEFAULT_SCAN_SETTINGS);
   const library = useLibrary().data;
@@ -40,6 +47,9 @@ export function ScanCapture({ afterAcknowledge }: { afterAcknowledge?: (scan: Ac
   useEffect(() => {
     identifyClient();
   }, []);
+  useEffect(() => {
+    if (sharedFile) chooseFile(sharedFile);
+  }, [sharedFile, chooseFile]);
   const outcome: IdentifyOutcome | null = state.status === 'done' ? state.outcome : state.status === 'running' ? state.previous : null;
 
   const acknowledgedOutcome = state.status === 'done' && acknowledged?.result === state.outcome.result ? state.outcome : null;

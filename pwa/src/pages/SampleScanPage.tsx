@@ -1,6 +1,7 @@
 import { IonButton } from '@ionic/react';
 import { useTranslation } from 'react-i18next';
-import { useParams } from 'react-router-dom';
+import { useEffect, useState } from 'react';
+import { useLocation, useParams } from 'react-router-dom';
 import { CautionNote } from '../components/CautionNote';
 import { PageShell } from '../components/PageShell';
 import { casePaths } from '../features/cases/casePaths';
@@ -9,6 +10,9 @@ import { useCase } from '../features/cases/useCases';
 import { useSample } from '../features/samples/useSamples';
 import { NEW_SCAN } from '../features/scans/scanPaths';
 import { useScanRecord } from '../features/scans/useScans';
+import { discardSharedFile, readSharedFile } from '../features/share/sharedFiles';
+import type { ScanFile } from '../features/identify/protocol';
+import type { SharedScanState } from './SharedFilesPage';
 import { ScanCapture } from './CapturePage';
 import { SampleScanDetail } from './SampleScanDetail';
 import { SampleScanSave } from './SampleScanSave';
@@ -35,6 +39,21 @@ export default function SampleScanPage() {
   const caseRow = useCase(caseId);
   const sample = useSample(sampleId);
   const isNew = scanId === NEW_SCAN;
+  const sharedFileId = (useLocation().state as SharedScanState | null)?.sharedFileId;
+  const [sharedFile, setSharedFile] = useState<ScanFile>();
+  const [sharedGone, setSharedGone] = useState(false);
+  useEffect(() => {
+    if (!isNew || !sharedFileId) return;
+    let live = true;
+    void readSharedFile(sharedFileId).then((kept) => {
+      if (!live) return;
+      if (kept) setSharedFile({ name: kept.file.name, bytes: kept.bytes });
+      else setSharedGone(true);
+    });
+    return () => {
+      live = false;
+    };
+  }, [isNew, sharedFileId]);
   const title = sample ? t(isNew ? 'capture.scans.newTitle' : 'capture.scanDetail.title', { label: sample.data.label }) : t('capture.scanDetail.untitled');
   if (caseRow === undefined || sample === undefined) return <PageShell title={title}>{null}</PageShell>;
   if (caseRow === null || sample === null) {
@@ -56,8 +75,24 @@ export default function SampleScanPage() {
       </div>
       {!isNew && <SavedScan scanId={scanId} />}
       {isNew && !editable && <p className="sb-notice">{t('capture.case.frozen')}</p>}
+      {isNew && sharedGone && (
+        <p className="sb-error" role="alert">
+          {t('share.gone')}
+        </p>
+      )}
       {isNew && editable && (
-        <ScanCapture afterAcknowledge={(scan) => <SampleScanSave caseId={caseId} sampleId={sampleId} sampleLabel={sample.data.label} scan={scan} />} />
+        <ScanCapture
+          sharedFile={sharedFile}
+          afterAcknowledge={(scan) => (
+            <SampleScanSave
+              caseId={caseId}
+              sampleId={sampleId}
+              sampleLabel={sample.data.label}
+              scan={scan}
+              onSaved={sharedFileId ? () => discardSharedFile(sharedFileId) : undefined}
+            />
+          )}
+        />
       )}
       <CautionNote laser />
     </PageShell>

@@ -11,7 +11,20 @@ import { formatDateTime } from '../i18n/format';
 import type { AcknowledgedScan } from './CapturePage';
 
 /** Saves an acknowledged scan to its sample, with the instrument check in force when it passed. */
-export function SampleScanSave({ caseId, sampleId, sampleLabel, scan }: { caseId: string; sampleId: string; sampleLabel: string; scan: AcknowledgedScan }) {
+export function SampleScanSave({
+  caseId,
+  sampleId,
+  sampleLabel,
+  scan,
+  onSaved,
+}: {
+  caseId: string;
+  sampleId: string;
+  sampleLabel: string;
+  scan: AcknowledgedScan;
+  /** Runs once the scan is stored (a shared file is then forgotten). */
+  onSaved?: () => Promise<void>;
+}) {
   const { t, i18n } = useTranslation();
   const navigate = useNavigate();
   const check = useLatestInstrumentCheck(scan.settings.technique);
@@ -23,6 +36,7 @@ export function SampleScanSave({ caseId, sampleId, sampleLabel, scan }: { caseId
     setError(null);
     try {
       const { scanId } = await saveScan(captureDb(), { caseId, sampleId, ...scan, check: check ?? null, recordedAt: scan.acknowledgedAt });
+      await onSaved?.();
       navigate(scanPaths.scan(caseId, sampleId, scanId), { replace: true });
     } catch (e) {
       // Nothing was written (one transaction): the screen keeps the file and result to try again.

@@ -18,6 +18,7 @@ import SamplePage from './SamplePage';
 import SampleScanPage from './SampleScanPage';
 import CapturePage from './CapturePage';
 import InstrumentCheckPage from './InstrumentCheckPage';
+import SharedFilesPage from './SharedFilesPage';
 import ReviewQueuePage from './ReviewQueuePage';
 import CaseReviewPage from './CaseReviewPage';
 import LibraryPage from './LibraryPage';
@@ -43,6 +44,7 @@ const TAB_ROUTES: Readonly<Record<TabId, readonly { path: string; Page: Componen
   capture: [
     { path: 'capture', Page: CapturePage },
     { path: 'capture/instrument-check', Page: InstrumentCheckPage },
+    { path: 'capture/shared', Page: SharedFilesPage },
   ],
   review: [
     { path: 'review', Page: ReviewQueuePage },

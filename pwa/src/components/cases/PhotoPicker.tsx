@@ -1,8 +1,7 @@
 import { useId, useState } from 'react';
 import { useTranslation } from 'react-i18next';
 import { captureDb } from '../../features/cases/captureDb';
-import { addPhoto } from '../../features/photos/addPhoto';
-import { compressPhoto } from '../../features/photos/compressPhoto';
+import { addSamplePhotoFile } from '../../features/photos/addPhoto';
 import { usePhotos } from '../../features/photos/usePhotos';
 import { PhotoThumb } from './PhotoThumb';
 
@@ -21,9 +20,7 @@ export function PhotoPicker({ caseId, sampleId, sampleLabel, editable }: { caseI
     // One at a time: each photo is decoded at full camera size, which is heavy on a tablet.
     for (const file of Array.from(files)) {
       try {
-        const bytes = await compressPhoto(file);
-        const fileName = file.name.replace(/\.[^.]*$/, '') + '.jpg';
-        await addPhoto(captureDb(), { caseId, ownerType: 'sample', ownerId: sampleId }, { fileName, contentType: 'image/jpeg', bytes });
+        await addSamplePhotoFile(captureDb(), { caseId, sampleId }, file);
       } catch (error) {
         failed.push(t('capture.photos.failed', { file: file.name, reason: error instanceof Error ? error.message : String(error) }));
       }

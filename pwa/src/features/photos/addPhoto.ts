@@ -1,11 +1,9 @@
 import type { SitebandDb } from '../../db/db';
 import type { PhotoData } from '../../db/photosTable';
 import { recordUpsert } from '../sync/recordChange';
+import { compressPhoto } from './compressPhoto';
+import { MAX_PHOTO_BYTES, PHOTO_TYPES } from './photoTypes';
 import { sha256Hex } from './sha256';
-
-/** The photo types the server takes (api/src/attachments/attachment-limits.ts), and its size limit. */
-export const PHOTO_TYPES = ['image/jpeg', 'image/png', 'image/webp'] as const;
-export const MAX_PHOTO_BYTES = 10 * 1024 * 1024;
 
 /** Keeps a photo of a sample (or case) on the tablet with its SHA-256, queued for upload. */
 export async function addPhoto(
@@ -28,4 +26,11 @@ export async function addPhoto(
   };
   await recordUpsert(db, { entity: 'attachment', id, caseId: owner.caseId, data, extra: { bytes: photo.bytes, receivedBytes: 0, uploadedAt: null } });
   return id;
+}
+
+/** Compresses a camera or shared image to JPEG on the tablet and keeps it as a photo of the sample. */
+export async function addSamplePhotoFile(db: SitebandDb, owner: { caseId: string; sampleId: string }, file: Blob & { name: string }): Promise<string> {
+  const bytes = await compressPhoto(file);
+  const fileName = file.name.replace(/\.[^.]*$/, '') + '.jpg';
+  return addPhoto(db, { caseId: owner.caseId, ownerType: 'sample', ownerId: owner.sampleId }, { fileName, contentType: 'image/jpeg', bytes });
 }
