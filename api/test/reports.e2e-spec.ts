@@ -1,7 +1,11 @@
+import { execFileSync } from 'node:child_process';
 import { randomUUID } from 'node:crypto';
-import { readFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { identifySpectrum, importSpectrum, RAMAN_LASER_CAUTION } from '@siteband/shared';
 import { convert } from 'jcampconverter';
+import { REPORT_SECTIONS } from '../src/reports/case-report-document';
 import { ScanRecomputeQueue } from '../src/scans/scan-recompute.queue';
 import { demo, push, sha256, upsert, uploadWhole } from './support/field-records';
 import { startS3Fake, type S3Fake } from './support/s3-fake';
@@ -30,12 +34,20 @@ function asText(res: unknown, done: (error: Error | null, body: string) => void)
   stream.on('end', () => done(null, text));
 }
 
+/** The result a tablet stores for a raw file: the shared identification run on the device, in the sync form. */
+function tabletResult(name: string, technique: 'ir' | 'raman', excitationNm?: number): Record<string, unknown> {
+  const spectrum = importSpectrum(new Uint8Array(fixture(name)), { fileName: name, technique, ...(excitationNm ? { excitationNm } : {}) });
+  const { processed, result } = identifySpectrum(spectrum, { process: { technique, phase: 'condensed' } });
+  return JSON.parse(JSON.stringify({ ...result, quality: processed.quality, processing: processed.parameters, codeVersion: result.parameters.methodVersion }));
+}
+
 describe('Scan export and case report (e2e, MariaDB + S3 fake)', () => {
   let s3: S3Fake;
   let t: TestApp;
   let inspector: string;
   let otherInspector: string;
   let supervisor: string;
+  let supervisorName: string;
   let safety: string;
   let admin: string;
   let caseId: string;
@@ -45,7 +57,9 @@ describe('Scan export and case report (e2e, MariaDB + S3 fake)', () => {
     s3 = await startS3Fake();
     t = await startTestApp({ env: s3.env });
     inspector = (await signIn(t, DEMO.inspector)).accessToken;
-    supervisor = (await signIn(t, DEMO.supervisor)).accessToken;
+    const supervisorSignIn = await signIn(t, DEMO.supervisor);
+    supervisor = supervisorSignIn.accessToken;
+    supervisorName = (await t.http().get('/api/me').set('Authorization', `Bearer ${supervisor}`).expect(200)).body.displayName;
     safety = (await signIn(t, DEMO.safety_officer)).accessToken;
     admin = (await signIn(t, DEMO.admin)).accessToken;
     otherInspector = (await addUser(t, admin, 'reports.other@demo.test', 'inspector')).accessToken;
@@ -61,12 +75,12 @@ describe('Scan export and case report (e2e, MariaDB + S3 fake)', () => {
   });
 
   /** Pushes a scan with its raw file and uploads the bytes (unless `upload` is false); returns the scan id. */
-  async function scanWithRaw(options: { name: string; bytes: Buffer; technique: 'ir' | 'raman'; contentType?: string; upload?: boolean; result?: Record<string, unknown> | null }) {
+  async function scanWithRaw(options: { name: string; bytes: Buffer; technique: 'ir' | 'raman'; contentType?: string; upload?: boolean; result?: Record<string, unknown> | null; sample?: string }) {
     const scanId = randomUUID();
     const rawId = randomUUID();
     const raman = options.technique === 'raman';
     const results = await push(t, inspector, [
-      upsert('scan', scanId, demo.scan(sampleId, {
+      upsert('scan', scanId, demo.scan(options.sample ?? sampleId, {
         technique: options.technique, excitationNm: raman ? 785 : null, rawAttachmentId: rawId, rawSha256: sha256(options.bytes), result: options.result ?? null,
       })),
       upsert('attachment', rawId, {
@@ -142,6 +156,106 @@ describe('Scan export and case report (e2e, MariaDB + S3 fake)', () => {
       await t.http().get(`/api/scans/${ramanScan}/spectrum.jdx`).expect(401);
       await jdx(randomUUID(), supervisor).expect(404);
       await jdx('not-a-uuid', supervisor).expect(400);
+    });
+  });
+
+  describe('GET /api/cases/:caseId/report.pdf', () => {
+    const reportCase: string = randomUUID();
+    const reportSample = randomUUID();
+    let scanId: string;
+    const pdfText = async (token: string, id = reportCase): Promise<string> => {
+      const response = await t.http().get(`/api/cases/${id}/report.pdf`).set('Authorization', `Bearer ${token}`).buffer(true).parse((res, done) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (chunk: Buffer) => chunks.push(chunk));
+        res.on('end', () => done(null, Buffer.concat(chunks)));
+      }).expect(200);
+      expect(response.headers['content-type']).toBe('application/pdf');
+      expect(response.headers['content-disposition']).toContain(`case-report-${id}.pdf`);
+      const bytes = response.body as Buffer;
+      expect(bytes.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+      const dir = mkdtempSync(join(tmpdir(), 'siteband-report-'));
+      try {
+        writeFileSync(join(dir, 'report.pdf'), bytes);
+        // Debian's poppler-utils; -raw keeps the text in content order.
+        return execFileSync('pdftotext', ['-raw', join(dir, 'report.pdf'), '-'], { encoding: 'utf8' }).replace(/\s+/g, ' ');
+      } finally {
+        rmSync(dir, { recursive: true, force: true });
+      }
+    };
+
+    beforeAll(async () => {
+      const caseData = demo.case({ siteName: 'Berth 4 chemical store, Port Averin' });
+      const handover = randomUUID();
+      const results = await push(t, inspector, [
+        upsert('case', reportCase, caseData),
+        upsert('sample', reportSample, demo.sample(reportCase, { label: 'S-07', sealNumber: 'PA-000977' })),
+        upsert('handover', handover, demo.handover(reportSample)),
+        upsert('note', randomUUID(), demo.note(reportCase)),
+      ]);
+      expect(results.map((r) => r.status)).toEqual(['applied', 'applied', 'applied', 'applied']);
+      scanId = await scanWithRaw({ name: RAMAN_FIXTURE, bytes: fixture(RAMAN_FIXTURE), technique: 'raman', sample: reportSample, result: tabletResult(RAMAN_FIXTURE, 'raman', 785) });
+      const more = await push(t, inspector, [
+        upsert('escalation', randomUUID(), { caseId: reportCase, scanId, raisedAt: '2026-11-30T09:00:00.000Z', reason: 'Likely oxidiser stored beside diesel drums', hazardClasses: ['oxidising-solid'] }),
+        upsert('case', reportCase, { ...caseData, status: 'submitted' }, 1),
+      ]);
+      expect(more.map((r) => r.status)).toEqual(['applied', 'applied']);
+      await t.app.get(ScanRecomputeQueue).idle();
+    });
+
+    it('holds every section with the key values, the cautions and the spectrum plot, as extractable text', async () => {
+      const bundle = (await t.http().get(`/api/review/cases/${reportCase}`).set('Authorization', `Bearer ${supervisor}`).expect(200)).body;
+      const serverResult = bundle.scans[0].serverResult;
+      expect(serverResult).toBeTruthy();
+      const text = await pdfText(supervisor);
+      let at = 0;
+      for (const section of REPORT_SECTIONS) {
+        const found = text.indexOf(` ${section} `, at);
+        expect({ section, found: found >= 0 }).toEqual({ section, found: true });
+        at = found;
+      }
+      for (const value of [
+        'Case report: Berth 4 chemical store, Port Averin', '7 Breakwater Road, Port Averin', 'S-07', 'PA-000977', 'Courier M. Pell',
+        'Sacks stacked against a warm wall', 'Raman shift (cm-1); red ticks: picked peaks', 'From the server recomputation from the raw file',
+        serverResult.candidates[0].name, 'Explained peaks', 'Missing bands', 'Evidence against',
+        'Identification is presumptive', 'Confirm by laboratory analysis', RAMAN_LASER_CAUTION.slice(0, 60),
+        'Likely oxidiser stored beside diesel drums', 'Not signed off: the case is submitted.', 'The audit chain verified intact',
+      ]) {
+        expect({ value, found: text.includes(value) }).toEqual({ value, found: true });
+      }
+      // Assignments keep their mode labels in letters the report font has (nu for the Greek letter).
+      expect(text).toMatch(/NO3- symmetric stretch \(nu1/);
+      const firstPeak = serverResult.peaks.slice().sort((a: { relativeHeight: number }, b: { relativeHeight: number }) => b.relativeHeight - a.relativeHeight)[0];
+      expect(text).toContain(firstPeak.x.toFixed(1));
+    });
+
+    it('shows the review decisions and the sign-off once the supervisor has decided', async () => {
+      let version = (await t.http().get(`/api/review/cases/${reportCase}`).set('Authorization', `Bearer ${supervisor}`).expect(200)).body.case.version as number;
+      const decide = (body: Record<string, unknown>) => t.http().post(`/api/review/cases/${reportCase}/decisions`).set('Authorization', `Bearer ${supervisor}`).send(body).expect(201);
+      version = (await decide({ kind: 'needs_lab', scanId, comment: 'Send S-07 to the laboratory for confirmation', baseVersion: version })).body.case.version;
+      await decide({ kind: 'sign_off', comment: 'Reviewed with the site photographs', baseVersion: version });
+      const text = await pdfText(inspector);
+      expect(text).toContain(`Signed off by ${supervisorName}`);
+      expect(text).toContain('Needs laboratory confirmation');
+      expect(text).toContain('Send S-07 to the laboratory for confirmation');
+      expect(text).toContain('Reviewed with the site photographs');
+    });
+
+    it('is for the readers of the case only', async () => {
+      await pdfText(safety);
+      const other = await t.http().get(`/api/cases/${reportCase}/report.pdf`).set('Authorization', `Bearer ${otherInspector}`).expect(404);
+      expectErrorShape(other.body, 404, `/api/cases/${reportCase}/report.pdf`);
+      await t.http().get(`/api/cases/${reportCase}/report.pdf`).set('Authorization', `Bearer ${admin}`).expect(403);
+      await t.http().get(`/api/cases/${reportCase}/report.pdf`).expect(401);
+      await t.http().get(`/api/cases/${randomUUID()}/report.pdf`).set('Authorization', `Bearer ${supervisor}`).expect(404);
+    });
+
+    it('says where a plot is missing instead of failing', async () => {
+      // The first case holds a scan without a raw file, one still uploading and an unreadable one.
+      const text = await pdfText(supervisor, caseId);
+      expect(text).toContain('No spectrum plot: Scan');
+      expect(text).toContain('has no raw file on the server');
+      expect(text).toContain('is not completely uploaded yet');
+      expect(text).toContain('cannot be read');
     });
   });
 });

@@ -1,12 +1,15 @@
 import { Module } from '@nestjs/common';
+import { AuditModule } from '../audit/audit.module';
+import { ReviewModule } from '../review/review.module';
 import { ScansModule } from '../scans/scans.module';
-import { ScanExportController } from './scan-export.controller';
+import { CaseReportService } from './case-report.service';
+import { ReportsController } from './reports.controller';
 import { ScanExportService } from './scan-export.service';
 
-/** What leaves the system as files: the JCAMP-DX export of a scan and the case report. */
+/** What leaves the system as files: the case report (PDF) and the JCAMP-DX export of a scan. */
 @Module({
-  imports: [ScansModule],
-  controllers: [ScanExportController],
-  providers: [ScanExportService],
+  imports: [ScansModule, ReviewModule, AuditModule],
+  controllers: [ReportsController],
+  providers: [ScanExportService, CaseReportService],
 })
 export class ReportsModule {}

@@ -11,5 +11,6 @@ import { ReviewService } from './review.service';
   imports: [AuditModule, CasesModule, LibraryModule],
   controllers: [ReviewController],
   providers: [ReviewService, ReviewQueueService],
+  exports: [ReviewService],
 })
 export class ReviewModule {}
