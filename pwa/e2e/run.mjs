@@ -12,6 +12,7 @@ import { idleLockTests } from './idleLock.mjs';
 import { libraryTests } from './library.mjs';
 import { reviewTests } from './review.mjs';
 import { shareTargetTests } from './shareTarget.mjs';
+import { threeRoleTests } from './three-roles.mjs';
 import {
   ageStoredSession,
   openTab,
@@ -300,3 +301,4 @@ adminTests({ baseUrl: BASE_URL, password: PASSWORD });
 reviewTests({ baseUrl: BASE_URL, password: PASSWORD });
 idleLockTests({ baseUrl: BASE_URL, password: PASSWORD });
 shareTargetTests({ baseUrl: BASE_URL, password: PASSWORD });
+threeRoleTests({ baseUrl: BASE_URL, password: PASSWORD });
