@@ -4,17 +4,10 @@ import assert from 'node:assert/strict';
 import { after, before, describe, it } from 'node:test';
 import { blockingViolations } from './axe.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
-import { openTab, signInTo, signOut } from './shell.mjs';
+import { apiToken, openTab, signInTo, signOut } from './shell.mjs';
 
 async function assertAccessible(page, where) {
   assert.deepEqual(await blockingViolations(page), [], `axe found serious or critical problems on ${where}`);
-}
-
-/** Signs in through the API (not the browser) and answers the access token. */
-async function apiToken(baseUrl, email, password) {
-  const response = await fetch(`${baseUrl}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email, password }) });
-  assert.equal(response.status, 200, `sign-in of ${email} through the API`);
-  return (await response.json()).accessToken;
 }
 
 export function adminTests({ baseUrl, password }) {

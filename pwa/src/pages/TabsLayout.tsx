@@ -26,6 +26,7 @@ import StructureCheckPage from './StructureCheckPage';
 import CompoundDetailPage from './CompoundDetailPage';
 import CompoundEditPage from './CompoundEditPage';
 import EscalationsPage from './EscalationsPage';
+import EscalationPage from './EscalationPage';
 import UsersPage from './UsersPage';
 import AuditPage from './AuditPage';
 import AccountPage from './AccountPage';
@@ -57,7 +58,10 @@ const TAB_ROUTES: Readonly<Record<TabId, readonly { path: string; Page: Componen
     { path: 'library/:id', Page: CompoundDetailPage },
     { path: 'library/:id/edit', Page: CompoundEditPage },
   ],
-  escalations: [{ path: 'escalations', Page: EscalationsPage }],
+  escalations: [
+    { path: 'escalations', Page: EscalationsPage },
+    { path: 'escalations/:id', Page: EscalationPage },
+  ],
   users: [{ path: 'users', Page: UsersPage }],
   audit: [{ path: 'audit', Page: AuditPage }],
   account: [
