@@ -11,6 +11,8 @@ import {
 } from '@nestjs/swagger';
 import { InjectThrottlerStorage, ThrottlerGuard } from '@nestjs/throttler';
 import { ErrorResponseDto } from '../common/error-response.dto';
+import { SetPasswordDto } from '../users/dto/invite-user.dto';
+import { UsersService } from '../users/users.service';
 import { AuthService } from './auth.service';
 import type { ApiRequest, AuthenticatedUser } from './authenticated-user';
 import { CurrentUser } from './current-user.decorator';
@@ -27,6 +29,7 @@ import { signInThrottleKey, signInTracker } from './sign-in-throttle';
 export class AuthController {
   constructor(
     private readonly auth: AuthService,
+    private readonly users: UsersService,
     @InjectThrottlerStorage() private readonly attempts: SignInAttemptStore,
   ) {}
 
@@ -54,6 +57,16 @@ export class AuthController {
   @ApiUnauthorizedResponse({ type: ErrorResponseDto })
   refresh(@Body() dto: RefreshTokenDto): Promise<AuthResponseDto> {
     return this.auth.refresh(dto.refreshToken);
+  }
+
+  @Public()
+  @Post('set-password')
+  @HttpCode(HttpStatus.NO_CONTENT)
+  @ApiOperation({ summary: "Set an invited user's password with the token from their link (once, before INVITE_TTL runs out)" })
+  @ApiNoContentResponse()
+  @ApiBadRequestResponse({ type: ErrorResponseDto, description: 'A weak password, or a link that is used, expired or unknown' })
+  async setPassword(@Body() dto: SetPasswordDto): Promise<void> {
+    await this.users.setPasswordFromInvitation(dto.token, dto.password);
   }
 
   @Post('logout')

@@ -24,7 +24,7 @@ export class AuthService {
   /** Checks the password and starts a session (a new refresh-token family). */
   async signIn(email: string, password: string): Promise<AuthResponseDto> {
     const user = await this.users.findByEmail(email);
-    if (!user) {
+    if (!user || user.passwordHash === null) {
       await this.passwords.verifyDummy(password);
       throw new UnauthorizedException(WRONG_CREDENTIALS);
     }

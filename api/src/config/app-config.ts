@@ -2,7 +2,7 @@ import { isAbsolute, join, resolve } from 'node:path';
 import { parseDurationSeconds } from './duration';
 import { jwtSecretWeakness, readOrCreateDevJwtSecret } from './jwt-secret';
 import { REPO_ROOT } from './paths';
-import { readMailConfig, type EscalationTimerConfig, type MailConfig } from './mail-config';
+import { readMailConfig, type EscalationTimerConfig, type InviteConfig, type MailConfig } from './mail-config';
 import { readS3Config, type S3Config } from './s3-config';
 
 /** Where the API's database lives. */
@@ -43,6 +43,8 @@ export interface AppConfig {
   mail: MailConfig;
   /** Re-notifying unacknowledged escalations and the second contact. */
   escalationTimers: EscalationTimerConfig;
+  /** Invitations by e-mail. */
+  invite: InviteConfig;
 }
 
 export const NODE_ENVS = ['development', 'test', 'production'] as const;
@@ -173,7 +175,7 @@ export function loadConfig(env: Env = process.env): AppConfig {
   const logLevel = reader.oneOf('LOG_LEVEL', LOG_LEVELS, nodeEnv === 'test' ? 'warn' : 'info');
   const pwaDist = resolveFromRepo(reader.string('PWA_DIST', join(REPO_ROOT, 'pwa', 'dist')));
   const s3 = readS3Config(reader, nodeEnv);
-  const { mail, escalationTimers } = readMailConfig(reader, nodeEnv, port);
+  const { mail, escalationTimers, invite } = readMailConfig(reader, nodeEnv, port);
 
   if (reader.problems.length) throw new ConfigError(reader.problems);
   return {
@@ -190,5 +192,6 @@ export function loadConfig(env: Env = process.env): AppConfig {
     s3,
     mail,
     escalationTimers,
+    invite,
   };
 }

@@ -36,6 +36,7 @@ describe('mail and escalation timer configuration', () => {
       retryMaxSeconds: 3600,
     });
     expect(config.escalationTimers).toEqual({ renotifyAfterSeconds: 900, secondContact: undefined, secondContactAfterSeconds: 1800 });
+    expect(config.invite).toEqual({ ttlSeconds: 72 * 3600 });
   });
 
   it('reads every variable it documents', () => {
@@ -52,6 +53,7 @@ describe('mail and escalation timer configuration', () => {
       ESCALATION_RENOTIFY_AFTER: '5m',
       ESCALATION_SECOND_CONTACT: ' Duty.Manager@Example.org ',
       ESCALATION_SECOND_CONTACT_AFTER: '20 min',
+      INVITE_TTL: '1d',
     });
     expect(config.mail).toEqual({
       smtpHost: 'relay.example',
@@ -63,6 +65,7 @@ describe('mail and escalation timer configuration', () => {
       retryBaseSeconds: 10,
       retryMaxSeconds: 600,
     });
+    expect(config.invite.ttlSeconds).toBe(86400);
     expect(config.escalationTimers).toEqual({ renotifyAfterSeconds: 300, secondContact: 'duty.manager@example.org', secondContactAfterSeconds: 1200 });
   });
 

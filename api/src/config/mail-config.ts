@@ -1,7 +1,7 @@
 import { normalizeEmail } from '../users/email';
 import type { EnvReader, NodeEnv } from './app-config';
 
-/** Outgoing mail (through the outbox) and the escalation timers. */
+/** Outgoing mail (through the outbox), the escalation timers and invitations. */
 export interface MailConfig {
   /** SMTP relay; in development and tests the local fake (`scripts/fakes/smtp.mjs`). */
   smtpHost: string;
@@ -27,11 +27,16 @@ export interface EscalationTimerConfig {
   secondContactAfterSeconds: number;
 }
 
+/** A single-use set-password link's lifetime. */
+export interface InviteConfig {
+  ttlSeconds: number;
+}
+
 // A plain shape check for addresses in configuration (common practice); the relay has the last word.
 const ADDRESS = /^[^\s@<>]+@[^\s@<>]+\.[^\s@<>]+$/;
 
-/** Reads SMTP_*, APP_PUBLIC_URL, MAIL_* and ESCALATION_*. */
-export function readMailConfig(reader: EnvReader, nodeEnv: NodeEnv, port: number): { mail: MailConfig; escalationTimers: EscalationTimerConfig } {
+/** Reads SMTP_*, APP_PUBLIC_URL, MAIL_*, ESCALATION_* and INVITE_TTL. */
+export function readMailConfig(reader: EnvReader, nodeEnv: NodeEnv, port: number): { mail: MailConfig; escalationTimers: EscalationTimerConfig; invite: InviteConfig } {
   const smtpHost = reader.string('SMTP_HOST', '127.0.0.1');
   const smtpPort = reader.integer('SMTP_PORT', 2525, 1, 65535);
   const smtpUser = reader.optional('SMTP_USER');
@@ -63,9 +68,11 @@ export function readMailConfig(reader: EnvReader, nodeEnv: NodeEnv, port: number
   if (secondContact !== undefined && !ADDRESS.test(secondContact)) {
     reader.problems.push(`ESCALATION_SECOND_CONTACT must be an e-mail address, got "${secondContactRaw}"`);
   }
+  const ttlSeconds = reader.duration('INVITE_TTL', '72h');
 
   return {
     mail: { smtpHost, smtpPort, smtpAuth, from, publicUrl, pollIntervalSeconds, retryBaseSeconds, retryMaxSeconds },
     escalationTimers: { renotifyAfterSeconds, secondContact, secondContactAfterSeconds },
+    invite: { ttlSeconds },
   };
 }

@@ -31,7 +31,7 @@ export async function seedDemoData(dataSource: DataSource, demoPassword: string)
       report.created.push(demo.email);
       continue;
     }
-    const passwordMatches = await passwords.verify(demoPassword, existing.passwordHash);
+    const passwordMatches = existing.passwordHash !== null && (await passwords.verify(demoPassword, existing.passwordHash));
     const same =
       passwordMatches && existing.displayName === demo.displayName && existing.role === demo.role && existing.active;
     if (same) {

@@ -18,9 +18,9 @@ export class User {
   @Column({ type: 'enum', enum: ROLES })
   role: Role;
 
-  /** bcrypt hash (cost 12). */
-  @Column({ type: 'varchar', length: 72 })
-  passwordHash: string;
+  /** bcrypt hash (cost 12); null for an invited user who has not set a password yet (who cannot sign in). */
+  @Column({ type: 'varchar', length: 72, nullable: true })
+  passwordHash: string | null;
 
   @Column({ type: 'boolean', default: true })
   active: boolean;

@@ -15,6 +15,7 @@ import { CurrentUser } from '../auth/current-user.decorator';
 import { Roles } from '../auth/roles.decorator';
 import { ErrorResponseDto } from '../common/error-response.dto';
 import { CreateUserDto } from './dto/create-user.dto';
+import { InviteUserDto } from './dto/invite-user.dto';
 import { UpdateUserDto } from './dto/update-user.dto';
 import { UserDto } from './dto/user.dto';
 import { UsersService } from './users.service';
@@ -42,6 +43,14 @@ export class UsersController {
   @ApiConflictResponse({ type: ErrorResponseDto, description: 'The email is taken' })
   async create(@Body() dto: CreateUserDto, @CurrentUser() actingUser: AuthenticatedUser): Promise<UserDto> {
     return UserDto.fromEntity(await this.users.create(dto, actingUser));
+  }
+
+  @Post('invitations')
+  @ApiOperation({ summary: 'Invite someone by e-mail: a user without a password, and a single-use set-password link by mail' })
+  @ApiCreatedResponse({ type: UserDto })
+  @ApiConflictResponse({ type: ErrorResponseDto, description: 'The email is taken' })
+  async invite(@Body() dto: InviteUserDto, @CurrentUser() actingUser: AuthenticatedUser): Promise<UserDto> {
+    return UserDto.fromEntity(await this.users.invite(dto, actingUser));
   }
 
   @Patch(':id')

@@ -4,6 +4,7 @@ import { CreateLibraryEdits1796240000000 } from './1796240000000-CreateLibraryEd
 import { AddScanRecomputation1796250000000 } from './1796250000000-AddScanRecomputation';
 import { CreateReviewDecisions1796260000000 } from './1796260000000-CreateReviewDecisions';
 import { AddEscalationWorkflowAndMail1796270000000 } from './1796270000000-AddEscalationWorkflowAndMail';
+import { AddUserInvitations1796270000001 } from './1796270000001-AddUserInvitations';
 import { CreateAuditLog1796280000000 } from './1796280000000-CreateAuditLog';
 
 /** Every committed migration, oldest first (listed, not globbed, so sources and dist behave the same). */
@@ -14,5 +15,6 @@ export const MIGRATIONS = [
   AddScanRecomputation1796250000000,
   CreateReviewDecisions1796260000000,
   AddEscalationWorkflowAndMail1796270000000,
+  AddUserInvitations1796270000001,
   CreateAuditLog1796280000000,
 ];
