@@ -56,6 +56,8 @@ suite "command-line contract tests (node:test)" node --test scripts/cli/
 suite "api unit tests (Jest)" npm test -w api
 suite "api e2e tests (Jest + supertest, MariaDB)" npm run test:e2e -w api
 suite "browser e2e tests (playwright-core, Chromium)" browser_e2e
+# The PWA's sync engine against API processes killed mid-sync; its own database, S3 fake and API ports (PORT+950, +951; S3_PORT+950).
+suite "sync fault injection (node:test, API processes killed)" node --test scripts/sync-harness/
 
 echo
 for s in "${passed[@]}"; do echo "  ok    $s"; done

@@ -18,19 +18,10 @@ import {
   sumBandPositions,
 } from '../../shared/dist/identify/index.js';
 import { processScan } from '../../shared/dist/spectrum/index.js';
+import { seededRandom } from '../sync-harness/random.mjs';
 
 const POINTS = 4096;
 const ENTRIES = 10_000;
-
-function seeded(seed) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = Math.imul(a ^ (a >>> 15), a | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /** The bundled library plus invented copies (bands shifted up to ±15 cm⁻¹) up to `entries`. */
 function expandedLibrary(entries, random) {
@@ -77,7 +68,7 @@ function median(f, runs) {
 
 /** Measure one scenario; returns the median stage times in ms and the ranking / plain-pass ratio. */
 export function measureIdentifyBench({ runs = 51, technique = 'raman', compoundId = 'toluene' } = {}) {
-  const random = seeded(42);
+  const random = seededRandom(42);
   const library = expandedLibrary(ENTRIES, random);
   const t0 = performance.now();
   const index = buildLibraryIndex(library.compounds, technique, 'condensed', engineAnalyser);

@@ -16,22 +16,13 @@ import {
   spectrumToJcamp,
   DEFAULT_BASELINE,
 } from '../../shared/dist/spectrum/index.js';
+import { seededRandom } from '../sync-harness/random.mjs';
 
 const POINTS = 4096;
 
 /** Seeded uniform numbers (mulberry32), so every run times the same scan. */
-function seeded(seed) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = Math.imul(a ^ (a >>> 15), a | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 function syntheticScan(technique) {
-  const random = seeded(technique === 'ir' ? 1 : 2);
+  const random = seededRandom(technique === 'ir' ? 1 : 2);
   const gauss = () => Math.sqrt(-2 * Math.log(1 - random())) * Math.cos(2 * Math.PI * random());
   const from = technique === 'ir' ? 400 : 150;
   const step = 3600 / (POINTS - 1);
