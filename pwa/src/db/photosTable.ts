@@ -23,4 +23,6 @@ export interface PhotoRow extends CaptureRow<PhotoData> {
   receivedBytes: number;
   /** ISO time the server verified the whole file; null until then. */
   uploadedAt: string | null;
+  /** Why the server refused the bytes for good (too large, wrong type, hash mismatch); not retried. */
+  uploadRefused?: string;
 }

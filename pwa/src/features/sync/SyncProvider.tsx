@@ -14,7 +14,8 @@ const SyncContext = createContext<SyncEngine | undefined>(undefined);
 
 /**
  * Runs sync for the signed-in inspector: at start, when the network comes back, every minute while
- * online, and whenever a screen asks ("sync now"). Offline, nothing is tried.
+ * online (unless a backoff after failures runs longer), and whenever a screen asks ("sync now").
+ * Offline, nothing is tried.
  */
 export function SyncProvider({ children }: { children: ReactNode }) {
   const api = useApiClient();
@@ -32,9 +33,14 @@ export function SyncProvider({ children }: { children: ReactNode }) {
     const run = () => {
       if (navigator.onLine) void engine.syncNow();
     };
+    // The clock never cuts a backoff short: after failures the next try waits for the engine's retry.
+    const tick = () => {
+      const { retryAt } = engine.status();
+      if (retryAt === null || retryAt <= Date.now()) run();
+    };
     run();
     window.addEventListener('online', run);
-    const timer = window.setInterval(run, SYNC_INTERVAL_MS);
+    const timer = window.setInterval(tick, SYNC_INTERVAL_MS);
     return () => {
       window.removeEventListener('online', run);
       window.clearInterval(timer);

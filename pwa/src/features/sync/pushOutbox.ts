@@ -3,6 +3,7 @@ import type { OutboxRow } from '../../db/outboxTable';
 import type { ApiClient } from '../api/client';
 import { applyResult } from './applyResult';
 import { captureScope, tableFor } from './captureTables';
+import { refusalReason } from './refusal';
 import { refreshSyncState } from './syncState';
 import { MAX_BATCH, type ChangeEnvelope, type ChangeResult } from './syncTypes';
 
@@ -46,27 +47,56 @@ async function noteFailure(db: SitebandDb, batch: OutboxRow[], message: string):
   await db.outbox.bulkUpdate(batch.map((entry) => ({ key: entry.seq!, changes: { lastError: message } })));
 }
 
-/** Pushes the outbox in batches until nothing sendable is left; returns how many changes were answered. */
-export async function pushOutbox(db: SitebandDb, api: ApiClient, clientId: string): Promise<number> {
-  let answered = 0;
-  for (let batch = await nextBatch(db); batch.length > 0; batch = await nextBatch(db)) {
-    const changes = await markSending(db, batch);
-    let results: ChangeResult[];
-    try {
-      ({ results } = await api.request<{ results: ChangeResult[] }>('/api/sync/push', {
-        method: 'POST',
-        body: { clientId, batchId: crypto.randomUUID(), changes },
-      }));
-    } catch (error) {
+/** Marks a change the server refused as a request (too large, malformed) as rejected, with its reason. */
+async function refuse(db: SitebandDb, entry: OutboxRow, reason: string): Promise<void> {
+  await db.transaction('rw', captureScope(db), async () => {
+    await db.outbox.update(entry.seq!, { status: 'rejected', lastError: reason });
+    await refreshSyncState(db, entry.entity, entry.id);
+  });
+}
+
+/**
+ * Sends one batch and acts on the answers. When the server refuses the batch as a whole (400, 413:
+ * one change too large or malformed), the batch is split in halves, in order, until the refused
+ * change is alone: it is marked rejected with the server's reason and every other change goes through.
+ * A passing failure (no connection, 5xx) leaves the batch sending and is thrown, for the engine's backoff.
+ */
+async function deliver(db: SitebandDb, api: ApiClient, clientId: string, batch: OutboxRow[]): Promise<number> {
+  const changes = await markSending(db, batch);
+  let results: ChangeResult[];
+  try {
+    ({ results } = await api.request<{ results: ChangeResult[] }>('/api/sync/push', {
+      method: 'POST',
+      body: { clientId, batchId: crypto.randomUUID(), changes },
+    }));
+  } catch (error) {
+    const reason = refusalReason(error);
+    if (reason === undefined) {
       await noteFailure(db, batch, error instanceof Error ? error.message : String(error));
       throw error;
     }
-    const byChange = new Map(results.map((r) => [r.changeId, r]));
-    for (const entry of batch) {
-      const result = byChange.get(entry.changeId);
-      if (result) await applyResult(db, entry, result);
+    if (batch.length === 1) {
+      await refuse(db, batch[0], reason);
+      return 1;
     }
-    answered += results.length;
+    const half = Math.ceil(batch.length / 2);
+    return (await deliver(db, api, clientId, batch.slice(0, half))) + (await deliver(db, api, clientId, batch.slice(half)));
   }
+  const byChange = new Map(results.map((r) => [r.changeId, r]));
+  let unanswered = 0;
+  for (const entry of batch) {
+    const result = byChange.get(entry.changeId);
+    if (result) await applyResult(db, entry, result);
+    else unanswered += 1;
+  }
+  // Sending the rest again at once would loop for as long as the server keeps leaving them out.
+  if (unanswered > 0) throw new Error(`The server answered ${batch.length - unanswered} of ${batch.length} changes; the others are sent again later`);
+  return results.length;
+}
+
+/** Pushes the outbox in batches until nothing sendable is left; returns how many changes were answered. */
+export async function pushOutbox(db: SitebandDb, api: ApiClient, clientId: string): Promise<number> {
+  let answered = 0;
+  for (let batch = await nextBatch(db); batch.length > 0; batch = await nextBatch(db)) answered += await deliver(db, api, clientId, batch);
   return answered;
 }

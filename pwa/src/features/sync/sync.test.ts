@@ -136,6 +136,61 @@ describe('pushing the outbox', () => {
     expect(await everythingSynced(d)).toBe(true);
   });
 
+  it('splits a batch the server refuses as too large, rejects only the oversized change with the reason and sends the rest', async () => {
+    const d = await fresh();
+    const server = createTestServer({ maxPushChars: 20_000 });
+    const caseId = crypto.randomUUID();
+    const big = crypto.randomUUID();
+    await saveCase(d, caseId, caseData());
+    await saveSample(d, crypto.randomUUID(), sampleData(caseId, 'S-1'));
+    await saveSample(d, big, { ...sampleData(caseId, 'S-2'), description: 'x'.repeat(30_000) });
+    await saveSample(d, crypto.randomUUID(), sampleData(caseId, 'S-3'));
+    expect(await pushOutbox(d, clientFor(server), 'tablet-test')).toBe(4);
+    expect(server.writes.size).toBe(3);
+    expect(server.records.has(big)).toBe(false);
+    expect(await d.samples.get(big)).toMatchObject({ sync: 'local', rejectedReason: 'request entity too large' });
+    expect((await d.samples.get(big))?.data.description).toHaveLength(30_000);
+    expect((await d.outbox.toArray()).map((e) => [e.id, e.status])).toEqual([[big, 'rejected']]);
+    expect(await everythingSynced(d)).toBe(false);
+    // The whole batch, its second half, then the change alone; nothing more until the inspector changes it.
+    expect(server.pushes.map((b) => b.length)).toEqual([4, 2, 2, 1, 1]);
+    await pushOutbox(d, clientFor(server), 'tablet-test');
+    expect(server.pushes).toHaveLength(5);
+  });
+
+  it('stops when the answer leaves changes out, keeping them sending for a later cycle', async () => {
+    const d = await fresh();
+    const server = createTestServer();
+    const caseId = crypto.randomUUID();
+    await saveCase(d, caseId, caseData());
+    await saveSample(d, crypto.randomUUID(), sampleData(caseId, 'S-1'));
+    const dropLast: typeof fetch = async (input, init) => {
+      const response = await server.fetch(input, init);
+      const body = (await response.json()) as { results: unknown[] };
+      return new Response(JSON.stringify({ results: body.results.slice(0, -1) }), { status: 200, headers: { 'Content-Type': 'application/json' } });
+    };
+    const tokens = { current: () => ({ accessToken: 'a', refreshToken: 'r' }), save: async () => undefined, clear: async () => undefined };
+    await expect(pushOutbox(d, createApiClient({ tokens, fetchFn: dropLast }), 'tablet-test')).rejects.toThrow('The server answered 1 of 2 changes');
+    expect(server.pushes).toHaveLength(1);
+    expect((await d.outbox.toArray()).map((e) => e.status)).toEqual(['sending']);
+    await pushOutbox(d, clientFor(server), 'tablet-test');
+    expect(await everythingSynced(d)).toBe(true);
+  });
+
+  it('keeps a batch sending through a server fault (503) and re-sends it unchanged on the retry', async () => {
+    const d = await fresh();
+    const server = createTestServer();
+    const caseId = crypto.randomUUID();
+    await saveCase(d, caseId, caseData());
+    server.answerNext(1, 503);
+    const engine = createSyncEngine({ db: d, api: clientFor(server), sender: senderFor(server), clientId: 'tablet-test', schedule: () => () => undefined, backoff: { random: () => 0 } });
+    expect(await engine.syncNow()).toMatchObject({ failures: 1, lastError: 'answered 503 for the test' });
+    expect(await d.outbox.toArray()).toEqual([expect.objectContaining({ status: 'sending', lastError: 'answered 503 for the test' })]);
+    expect(await engine.syncNow()).toMatchObject({ failures: 0, lastError: null });
+    expect(server.writes.get(caseId)).toBe(1);
+    expect(await everythingSynced(d)).toBe(true);
+  });
+
   it('keeps both versions on a conflict; "keep mine" re-sends on the server version, "take the server\'s" adopts it', async () => {
     const d = await fresh();
     const server = createTestServer();
@@ -215,6 +270,29 @@ describe('photos and the engine', () => {
     expect(await d.photos.get(photoId)).toMatchObject({ sync: 'server', uploadedAt: expect.any(String) });
     expect(await everythingSynced(d)).toBe(true);
   }, 60_000);
+
+  it('keeps a file the server refuses with the reason, never re-sends it, and goes on with the others and the pull', async () => {
+    const d = await fresh();
+    const server = createTestServer({ maxFileBytes: 50_000 });
+    const caseId = crypto.randomUUID();
+    await saveCase(d, caseId, caseData());
+    const owner = { caseId, ownerType: 'case' as const, ownerId: caseId };
+    const large = await addPhoto(d, owner, { fileName: 'wide.jpg', contentType: 'image/jpeg', bytes: new Uint8Array(60_000).fill(7).buffer });
+    const small = await addPhoto(d, owner, { fileName: 'door.jpg', contentType: 'image/jpeg', bytes: new Uint8Array(1_000).fill(9).buffer });
+    let puts = 0;
+    const sender = senderFor(server);
+    const counting: ByteSender = { put: (path, body, headers) => ((puts += 1), sender.put(path, body, headers)) };
+    const engine = createSyncEngine({ db: d, api: clientFor(server), sender: counting, clientId: 'tablet-test', schedule: () => () => undefined });
+    expect(await engine.syncNow()).toMatchObject({ failures: 0, lastError: null });
+    expect(await d.photos.get(small)).toMatchObject({ sync: 'server' });
+    expect(await d.photos.get(large)).toMatchObject({ sync: 'local', uploadRefused: 'The file is larger than 50000 bytes', rejectedReason: 'The file is larger than 50000 bytes' });
+    expect((await d.photos.get(large))?.bytes?.byteLength).toBe(60_000);
+    expect(await d.syncMeta.get('pullCursor')).toBeDefined();
+    expect(await everythingSynced(d)).toBe(false);
+    const sent = puts;
+    await engine.syncNow();
+    expect(puts).toBe(sent);
+  });
 
   it('schedules a retry with backoff after a failed cycle', async () => {
     const d = await fresh();

@@ -9,12 +9,18 @@ import { tableFor } from './captureTables';
  * conflict wins, then anything in flight, then anything never answered; a rejected change leaves
  * the record on server in its earlier version, or local only when the server never had it.
  */
-export function deriveSyncState(row: Pick<CaptureRow<unknown>, 'version'>, entries: readonly OutboxRow[], photoPending = false): SyncState {
+export function deriveSyncState(row: Pick<CaptureRow<unknown>, 'version'>, entries: readonly OutboxRow[], bytes: 'none' | 'pending' | 'refused' = 'none'): SyncState {
   if (entries.some((e) => e.status === 'conflict')) return 'conflict';
   if (entries.some((e) => e.status === 'sending')) return 'sending';
   if (entries.some((e) => e.status === 'pending')) return 'local';
-  if (row.version === null) return 'local';
-  return photoPending ? 'sending' : 'server';
+  if (row.version === null || bytes === 'refused') return 'local';
+  return bytes === 'pending' ? 'sending' : 'server';
+}
+
+/** Where an attachment's bytes stand: still to upload, refused by the server, or nothing waiting. */
+function bytesState(photo: PhotoRow): 'none' | 'pending' | 'refused' {
+  if (photo.uploadedAt !== null || photo.bytes === undefined) return 'none';
+  return photo.uploadRefused === undefined ? 'pending' : 'refused';
 }
 
 /** The outbox entries of one record, oldest first. */
@@ -29,9 +35,9 @@ export async function refreshSyncState(db: SitebandDb, entity: CaptureEntity, id
   if (!row) return;
   const entries = await entriesFor(db, entity, id);
   // A photo is on server only once its bytes are there too, not just its metadata.
-  const photoPending = entity === 'attachment' && (row as PhotoRow).uploadedAt === null && (row as PhotoRow).bytes !== undefined;
-  const rejected = entries.find((e) => e.status === 'rejected');
-  await table.update(id, { sync: deriveSyncState(row, entries, photoPending), rejectedReason: rejected?.lastError ?? undefined });
+  const photo = entity === 'attachment' ? (row as PhotoRow) : undefined;
+  const rejected = entries.find((e) => e.status === 'rejected')?.lastError ?? photo?.uploadRefused;
+  await table.update(id, { sync: deriveSyncState(row, entries, photo ? bytesState(photo) : 'none'), rejectedReason: rejected ?? undefined });
 }
 
 /** True when nothing the tablet holds waits for the server (no outbox entry, no photo bytes left to upload). */

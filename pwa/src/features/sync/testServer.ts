@@ -13,6 +13,7 @@ interface Stored {
 export interface TestServer {
   fetch: typeof fetch;
   records: Map<string, Stored>;
+  /** Every push received, refused ones included. */
   pushes: ChangeEnvelope[][];
   /** Applied writes per record id, to check exactly-once delivery. */
   writes: Map<string, number>;
@@ -21,6 +22,8 @@ export interface TestServer {
   loseNextPushAnswer(): void;
   /** Makes the next n requests fail before reaching the server. */
   failNext(n: number): void;
+  /** Makes the next n requests get an error answer with this status, without touching anything. */
+  answerNext(n: number, status: number): void;
   /** Writes a record as another device would. */
   writeAsOtherDevice(entity: string, id: string, data: object): void;
 }
@@ -35,7 +38,15 @@ async function sha256Hex(bytes: Uint8Array): Promise<string> {
 }
 
 /** Builds a fresh test server. */
-export function createTestServer({ rejectIf }: { rejectIf?: (change: ChangeEnvelope) => string | undefined } = {}): TestServer {
+export interface TestServerOptions {
+  rejectIf?: (change: ChangeEnvelope) => string | undefined;
+  /** Push bodies over this many characters get 413 and nothing is applied (the server's JSON body limit). */
+  maxPushChars?: number;
+  /** Uploads of files declared larger than this get 413 (the server's size limit per kind). */
+  maxFileBytes?: number;
+}
+
+export function createTestServer({ rejectIf, maxPushChars = Infinity, maxFileBytes = Infinity }: TestServerOptions = {}): TestServer {
   const records = new Map<string, Stored>();
   const outcomes = new Map<string, ChangeResult>();
   const writes = new Map<string, number>();
@@ -44,6 +55,7 @@ export function createTestServer({ rejectIf }: { rejectIf?: (change: ChangeEnvel
   let seq = 0;
   let loseAnswer = false;
   let failing = 0;
+  let erring = { n: 0, status: 500 };
 
   function write(entity: string, id: string, data: Record<string, unknown>): ServerRecord {
     const previous = records.get(id)?.record;
@@ -75,10 +87,15 @@ export function createTestServer({ rejectIf }: { rejectIf?: (change: ChangeEnvel
       failing -= 1;
       throw new TypeError('Failed to fetch');
     }
+    if (erring.n > 0) {
+      erring.n -= 1;
+      return json({ statusCode: erring.status, message: `answered ${erring.status} for the test` }, erring.status);
+    }
     const url = new URL(String(input), 'http://tablet.test');
     if (url.pathname === '/api/sync/push') {
       const body = JSON.parse(String(init.body)) as { changes: ChangeEnvelope[] };
       pushes.push(body.changes);
+      if (String(init.body).length > maxPushChars) return json({ statusCode: 413, error: 'Payload Too Large', message: 'request entity too large' }, 413);
       const results = body.changes.map(apply);
       if (loseAnswer) {
         loseAnswer = false;
@@ -99,6 +116,7 @@ export function createTestServer({ rejectIf }: { rejectIf?: (change: ChangeEnvel
       const have = uploads.get(id) ?? new Uint8Array(0);
       const status = async () => ({ id, size: meta.size, receivedBytes: have.length, complete: have.length === meta.size && (await sha256Hex(have)) === meta.sha256, sha256: meta.sha256, uploadedAt: have.length === meta.size ? '2026-01-01T00:00:01.000Z' : null });
       if (content[2] === 'status') return json(await status());
+      if (meta.size > maxFileBytes) return json({ statusCode: 413, error: 'Payload Too Large', message: `The file is larger than ${maxFileBytes} bytes` }, 413);
       const range = String((init.headers as Record<string, string>)['Content-Range']).match(/^bytes (\d+)-(\d+)\/(\d+)$/);
       if (!range || Number(range[1]) !== have.length) return json({ message: `upload must resume at ${have.length}` }, 409);
       const chunk = new Uint8Array(init.body as ArrayBuffer);
@@ -119,6 +137,7 @@ export function createTestServer({ rejectIf }: { rejectIf?: (change: ChangeEnvel
     uploads,
     loseNextPushAnswer: () => void (loseAnswer = true),
     failNext: (n) => void (failing = n),
+    answerNext: (n, status) => void (erring = { n, status }),
     writeAsOtherDevice: (entity, id, data) => void write(entity, id, data as Record<string, unknown>),
   };
 }

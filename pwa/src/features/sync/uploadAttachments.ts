@@ -2,6 +2,7 @@ import type { SitebandDb } from '../../db/db';
 import type { PhotoRow } from '../../db/photosTable';
 import type { ApiClient } from '../api/client';
 import { ApiError } from '../api/apiError';
+import { refusalReason } from './refusal';
 import { refreshSyncState } from './syncState';
 import type { AttachmentStatus } from './syncTypes';
 
@@ -25,10 +26,19 @@ async function save(db: SitebandDb, id: string, status: AttachmentStatus): Promi
   });
 }
 
+/** Keeps the server's reason beside the bytes: the file stays on the tablet, shown as not on server, never dropped. */
+async function refuse(db: SitebandDb, id: string, reason: string): Promise<void> {
+  await db.transaction('rw', [db.photos, db.outbox], async () => {
+    await db.photos.update(id, { uploadRefused: reason });
+    await refreshSyncState(db, 'attachment', id);
+  });
+}
+
 /**
  * Uploads one attachment's bytes (a photo or a scan's raw file) in chunks with Content-Range, resuming from the offset the server
  * reports. A 409 (offset moved) or 401 asks the server where it stands and carries on; a 422 (hash
- * mismatch, the server discarded everything) starts over once.
+ * mismatch, the server discarded everything) starts over once. A refusal that sending again cannot change
+ * (413, 415, a second 422) is stored on the attachment with its reason; any other failure is thrown for backoff.
  */
 export async function uploadAttachment(db: SitebandDb, api: ApiClient, sender: ByteSender, attachment: PhotoRow): Promise<void> {
   const bytes = attachment.bytes;
@@ -57,15 +67,19 @@ export async function uploadAttachment(db: SitebandDb, api: ApiClient, sender: B
       restarts += 1;
       offset = 0;
     } else {
-      throw await ApiError.fromResponse(response);
+      const error = await ApiError.fromResponse(response);
+      const reason = refusalReason(error);
+      if (reason === undefined) throw error;
+      await refuse(db, attachment.id, reason);
+      return;
     }
   }
   throw new Error(`The upload of ${attachment.data.fileName} made no progress`);
 }
 
-/** Uploads every attachment whose metadata the server holds and whose bytes it has not verified yet. */
+/** Uploads every attachment whose metadata the server holds and whose bytes it has neither verified nor refused. */
 export async function uploadAttachments(db: SitebandDb, api: ApiClient, sender: ByteSender): Promise<number> {
-  const waiting = await db.photos.filter((p) => p.version !== null && p.uploadedAt === null && p.bytes !== undefined).toArray();
+  const waiting = await db.photos.filter((p) => p.version !== null && p.uploadedAt === null && p.bytes !== undefined && p.uploadRefused === undefined).toArray();
   for (const attachment of waiting) await uploadAttachment(db, api, sender, attachment);
   return waiting.length;
 }
