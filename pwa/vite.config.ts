@@ -2,6 +2,7 @@ import { defineConfig } from 'vite';
 import react from '@vitejs/plugin-react';
 import { VitePWA } from 'vite-plugin-pwa';
 import { webManifest } from './pwa-manifest.ts';
+import { precompress } from './precompress.ts';
 import { parseOfflineSessionHours } from './src/config/offlineSessionHours.ts';
 import { parseIdleLockMinutes } from './src/config/idleLockMinutes.ts';
 
@@ -35,6 +36,7 @@ export default defineConfig({
         importScripts: ['/share-target-sw.js'],
       },
     }),
+    precompress(),
   ],
   build: {
     rolldownOptions: {

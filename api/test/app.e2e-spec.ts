@@ -1,6 +1,7 @@
 import { mkdtempSync, mkdirSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { brotliCompressSync, gzipSync } from 'node:zlib';
 import { seedDemoData } from '../src/database/seeder';
 import { DEMO_USERS } from '../src/database/seed-data';
 import { DEMO_PASSWORD, expectErrorShape, startTestApp, type TestApp } from './support/test-app';
@@ -15,6 +16,9 @@ describe('The app around the routes (e2e, MariaDB)', () => {
     writeFileSync(join(pwaDist, 'index.html'), '<!doctype html><html><body><div id="root">Siteband PWA</div></body></html>');
     writeFileSync(join(pwaDist, 'sw.js'), 'self.addEventListener("fetch", () => {});');
     writeFileSync(join(pwaDist, 'assets', 'index-Bx3k9q_Z.js'), 'console.log("app");');
+    // The compressed copies the PWA build writes beside its text files.
+    writeFileSync(join(pwaDist, 'assets', 'index-Bx3k9q_Z.js.br'), brotliCompressSync('console.log("app");'));
+    writeFileSync(join(pwaDist, 'assets', 'index-Bx3k9q_Z.js.gz'), gzipSync('console.log("app");'));
     writeFileSync(join(pwaDist, '.env'), 'SECRET=1');
     t = await startTestApp({ pwaDist, env: { PORT: '3456' } });
   });
@@ -103,6 +107,23 @@ describe('The app around the routes (e2e, MariaDB)', () => {
       expect(asset.headers['content-type']).toMatch(/javascript/);
       const worker = await t.http().get('/sw.js').expect(200);
       expect(worker.headers['cache-control']).toBe('no-cache');
+    });
+
+    it('sends the compressed copy a browser accepts, with the type of the file itself', async () => {
+      const brotli = await t.http().get('/assets/index-Bx3k9q_Z.js').set('Accept-Encoding', 'gzip, deflate, br').expect(200);
+      expect(brotli.headers['content-encoding']).toBe('br');
+      expect(brotli.headers['content-type']).toMatch(/javascript/);
+      expect(brotli.headers.vary).toMatch(/Accept-Encoding/);
+      expect(brotli.headers['cache-control']).toBe('public, max-age=31536000, immutable');
+      const gzip = await t.http().get('/assets/index-Bx3k9q_Z.js').set('Accept-Encoding', 'gzip').expect(200);
+      expect(gzip.headers['content-encoding']).toBe('gzip');
+      expect(gzip.text).toBe('console.log("app");');
+      const plain = await t.http().get('/assets/index-Bx3k9q_Z.js').set('Accept-Encoding', 'identity').expect(200);
+      expect(plain.headers['content-encoding']).toBeUndefined();
+      expect(plain.text).toBe('console.log("app");');
+      // index.html has no compressed copy here: sent as it is.
+      const page = await t.http().get('/').set('Accept-Encoding', 'br').expect(200);
+      expect(page.headers['content-encoding']).toBeUndefined();
     });
 
     it('answers a missing asset with 404, not with index.html', async () => {

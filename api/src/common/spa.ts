@@ -24,6 +24,7 @@ export function isApiPath(path: string, prefix = '/api'): boolean {
  * Serves the built PWA from `distDir` on every non-API GET: the file when it exists, otherwise
  * `index.html` so deep links (`/cases/42`) open the app. A missing file with an extension (an asset)
  * is a 404, never index.html in disguise. Other methods outside /api are 404 in the API's error shape.
+ * A file the build also wrote compressed (`.br`, `.gz`) is sent compressed to a browser that accepts it.
  */
 export function createSpaMiddleware(distDir: string, apiPrefix = '/api') {
   const root = resolve(distDir);
@@ -51,9 +52,9 @@ export function createSpaMiddleware(distDir: string, apiPrefix = '/api') {
     const hidden = decoded.split('/').some((segment) => segment.startsWith('.'));
     if (!inside || hidden || decoded.includes('\0')) return next(new NotFoundException(`Cannot GET ${path}`));
 
-    if (file !== root && (await isFile(file))) return send(response, next, file, file.slice(root.length + 1).split(sep).join('/'));
+    if (file !== root && (await isFile(file))) return send(request, response, next, file, file.slice(root.length + 1).split(sep).join('/'));
     if (extname(decoded) && extname(decoded) !== '.html') return next(new NotFoundException(`No file at ${path}`));
-    if (await isFile(indexFile)) return send(response, next, indexFile, 'index.html');
+    if (await isFile(indexFile)) return send(request, response, next, indexFile, 'index.html');
     return next(new NotFoundException('The web app is not built on this server (build it with `npm run build -w pwa`)'));
   };
 }
@@ -66,8 +67,29 @@ async function isFile(path: string): Promise<boolean> {
   }
 }
 
-function send(response: Response, next: NextFunction, file: string, relativePath: string): void {
-  response.sendFile(file, { headers: { 'Cache-Control': cacheControlFor(relativePath) }, cacheControl: false, dotfiles: 'deny' }, (error) => {
+/** The compressed copies the PWA build writes beside each text file (pwa/precompress.ts), best first. */
+const PRECOMPRESSED = [
+  { encoding: 'br', suffix: '.br' },
+  { encoding: 'gzip', suffix: '.gz' },
+] as const;
+
+/** The best compressed copy of `file` the browser accepts, when the build wrote one. */
+async function compressedCopy(request: Request, file: string): Promise<(typeof PRECOMPRESSED)[number] | undefined> {
+  for (const copy of PRECOMPRESSED) {
+    if (request.acceptsEncodings(copy.encoding) === copy.encoding && (await isFile(file + copy.suffix))) return copy;
+  }
+  return undefined;
+}
+
+async function send(request: Request, response: Response, next: NextFunction, file: string, relativePath: string): Promise<void> {
+  const headers: Record<string, string> = { 'Cache-Control': cacheControlFor(relativePath), Vary: 'Accept-Encoding' };
+  const copy = await compressedCopy(request, file);
+  if (copy) {
+    headers['Content-Encoding'] = copy.encoding;
+    // The type of the file itself, not of its .br or .gz copy (sendFile keeps a type already set).
+    response.type(extname(file));
+  }
+  response.sendFile(copy ? file + copy.suffix : file, { headers, cacheControl: false, dotfiles: 'deny' }, (error) => {
     if (error && !response.headersSent) next(error);
   });
 }
