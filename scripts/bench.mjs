@@ -8,6 +8,9 @@ const benches = [
   ['symmetry', './bench/symmetry.mjs', 'runSymmetryBench'],
   ['spectrum pipeline', './bench/spectrum.mjs', 'runSpectrumBench'],
   ['identification', './bench/identify.mjs', 'runIdentifyBench'],
+  ['sync', './bench/sync.mjs', 'runSyncBench'],
+  ['bundle size', './bench/bundle.mjs', 'runBundleBench'],
+  ['lighthouse', './bench/lighthouse.mjs', 'runLighthouseBench'],
 ];
 const only = process.argv[2];
 for (const [name, path, fn] of benches) {
