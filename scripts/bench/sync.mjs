@@ -7,7 +7,7 @@
 import { fileURLToPath } from 'node:url';
 import { loadClient } from '../sync-harness/client.mjs';
 import { seededRandom } from '../sync-harness/random.mjs';
-import { signIn, startStack } from '../sync-harness/stack.mjs';
+import { newInspector, signIn, startStack } from '../sync-harness/stack.mjs';
 
 const SCANS = 500;
 const POINTS = 4096;
@@ -45,7 +45,7 @@ export async function runSyncBench() {
   const stack = await startStack({ name: 'bench', offset: 960 });
   let db;
   try {
-    const session = await signIn(stack.baseUrl);
+    const session = await signIn(stack.baseUrl, await newInspector(stack.baseUrl, 'bench'));
     const spent = { push: 0, upload: 0, pull: 0, other: 0 };
     const sent = { push: 0, upload: 0, pull: 0, other: 0 };
     const counted = { push: 0, upload: 0, pull: 0, other: 0 };
@@ -97,7 +97,7 @@ export async function runSyncBench() {
     const status = await engine.syncNow();
     const totalMs = performance.now() - started;
     if (status.lastError !== null || !(await client.everythingSynced(db))) throw new Error(`the bench sync did not finish: ${status.lastError}`);
-    const [[serverRows]] = await stack.query('SELECT COUNT(*) FROM attachments WHERE uploadedAt IS NOT NULL');
+    const [[serverRows]] = await stack.query('SELECT COUNT(*) FROM attachments WHERE uploadedAt IS NOT NULL AND caseId = ?', [caseId]);
 
     console.log(`queued offline: ${records} records (1 case, ${SAMPLES} samples, ${SCANS} scans of ${POINTS} points, ${2 * SCANS} files: raw + photo) in ${seconds(queuedMs)} s (not counted below)`);
     console.log(`sync total: ${seconds(totalMs)} s (target < 30 s) for ${records} records and ${mb(fileBytes).toFixed(1)} MB of files; ${serverRows} files verified on the server`);

@@ -54,7 +54,8 @@ function apiProcess(port, env, name) {
       child.stdout.pipe(log, { end: false });
       child.stderr.pipe(log, { end: false });
       const started = child;
-      await waitFor(async () => started.exitCode !== null || (await healthy()), `the API on port ${port}`);
+      // Generous: on a busy machine a Nest boot has taken over a minute.
+      await waitFor(async () => started.exitCode !== null || (await healthy()), `the API on port ${port}`, 240_000);
       if (started.exitCode !== null) throw new Error(`the API on port ${port} exited with ${started.exitCode}; see ${log.path}`);
     },
     /** Sends the signal without waiting: for a kill in the middle of a request. */
@@ -91,14 +92,15 @@ export async function startStack({ name, offset, count = 1 }) {
   sql(`DROP DATABASE IF EXISTS \`${dbName}\``);
   sql(`CREATE DATABASE \`${dbName}\` CHARACTER SET utf8mb4`);
   const env = { DB_NAME: dbName, S3_PORT: String(s3Port), S3_BUCKET: bucket, LOG_LEVEL: 'warn' };
-  run('node', ['api/dist/database/run-migrations.js'], env);
-  run('node', ['api/dist/database/seed.js'], env);
-
+  // The seed writes its demo cases through the upload service too, so the S3 fake comes first.
   const s3 = spawn('node', ['scripts/fakes/s3.mjs', '--port', String(s3Port), '--bucket', bucket], { cwd: root, stdio: ['ignore', 'pipe', 'inherit'] });
   let s3Ready = false;
   s3.stdout.on('data', (chunk) => void (s3Ready ||= String(chunk).includes('ready')));
   await waitFor(() => s3Ready || s3.exitCode !== null, 'the S3 fake');
   if (!s3Ready) throw new Error(`the S3 fake did not start on port ${s3Port}`);
+
+  run('node', ['api/dist/database/run-migrations.js'], env);
+  run('node', ['api/dist/database/seed.js'], env);
 
   const connection = await mysql.createConnection({
     host: process.env.DB_HOST ?? '127.0.0.1',
@@ -117,8 +119,8 @@ export async function startStack({ name, offset, count = 1 }) {
     baseUrl: apis[0].baseUrl,
     apis,
     dbName,
-    /** Rows of a query on this stack's database, each an array of its columns. */
-    query: async (statement) => (await connection.query(statement))[0],
+    /** Rows of a query on this stack's database (`?` placeholders for `values`), each an array of its columns. */
+    query: async (statement, values = []) => (await connection.query(statement, values))[0],
     async close() {
       await connection.end();
       await Promise.all(apis.map((api) => api.stop('SIGTERM')));
@@ -131,12 +133,29 @@ export async function startStack({ name, offset, count = 1 }) {
   };
 }
 
-/** Signs the demo inspector in; returns a token source the API client can refresh through. */
+/**
+ * Adds an inspector of its own through the admin's users route, so the tablet under test sees only
+ * what it records (the demo inspector owns the seeded demo cases). Returns the sign-in.
+ */
+export async function newInspector(baseUrl, name) {
+  const admin = await signIn(baseUrl, { email: 'admin@demo.test', password: DEMO_INSPECTOR.password });
+  const user = { email: `${name}-${process.pid}@example.test`, password: `${name}-password-${process.pid}` };
+  const response = await fetch(`${baseUrl}/api/users`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${admin.tokens.current().accessToken}` },
+    body: JSON.stringify({ ...user, displayName: `Invented inspector (${name})`, role: 'inspector' }),
+  });
+  if (!response.ok) throw new Error(`adding the inspector failed: ${response.status} ${await response.text()}`);
+  return user;
+}
+
+/** Signs a user in; returns the user's id and a token source the API client can refresh through. */
 export async function signIn(baseUrl, user = DEMO_INSPECTOR) {
   const response = await fetch(`${baseUrl}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(user) });
   if (!response.ok) throw new Error(`sign-in failed: ${response.status} ${await response.text()}`);
   let auth = await response.json();
   return {
+    userId: auth.user.id,
     tokens: {
       current: () => ({ accessToken: auth.accessToken, refreshToken: auth.refreshToken }),
       save: async (next) => void (auth = next),
