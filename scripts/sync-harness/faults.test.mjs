@@ -10,7 +10,7 @@
 // give it, every file complete with its SHA-256, and on the tablet nothing lost and the outbox empty.
 //
 // Replay a run with SYNC_FAULTS_SEED=<seed printed at the start>; SYNC_FAULTS_ROUNDS sets the
-// number of API kills (default 22); each run also has a quarter as many dropped answers.
+// number of API kills (default 20); each run also has a quarter as many dropped answers.
 import assert from 'node:assert/strict';
 import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
@@ -21,7 +21,7 @@ import { seededRandom, shuffled } from './random.mjs';
 import { newInspector, signIn, startStack } from './stack.mjs';
 
 const SEED = Number(process.env.SYNC_FAULTS_SEED ?? Math.floor(Math.random() * 2 ** 31));
-const KILL_ROUNDS = Number(process.env.SYNC_FAULTS_ROUNDS ?? 22);
+const KILL_ROUNDS = Number(process.env.SYNC_FAULTS_ROUNDS ?? 20);
 const LOST_ROUNDS = Math.max(4, Math.ceil(KILL_ROUNDS / 4));
 console.log(`sync faults: seed ${SEED} (replay with SYNC_FAULTS_SEED=${SEED}), ${KILL_ROUNDS} API kills, ${LOST_ROUNDS} dropped answers`);
 
