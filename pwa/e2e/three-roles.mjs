@@ -12,6 +12,7 @@ import { after, before, describe, it } from 'node:test';
 import { blockingViolations } from './axe.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
 import { readCapture, waitForSynced } from './capture.mjs';
+import { waitForMail } from './inbox.mjs';
 import { apiToken } from './fieldCase.mjs';
 import { signInTo, waitForPage } from './shell.mjs';
 
@@ -19,28 +20,6 @@ const SPECTRA = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'fixtu
 
 async function assertAccessible(page, where) {
   assert.deepEqual(await blockingViolations(page), [], `axe found serious or critical problems on ${where}`);
-}
-
-/**
- * The fake SMTP server's read-only inbox (scripts/fakes/smtp.mjs): every captured mail as JSON.
- * scripts/test.sh names its web port in SMTP_WEB_PORT for the browser tests.
- */
-async function mails() {
-  const port = process.env.SMTP_WEB_PORT;
-  assert.ok(port, 'SMTP_WEB_PORT names the fake SMTP inbox (scripts/test.sh sets it)');
-  const response = await fetch(`http://127.0.0.1:${port}/messages.json`);
-  assert.equal(response.status, 200);
-  return response.json();
-}
-
-/** Waits (up to 30 s) for a captured mail whose text names the site. */
-async function waitForMail(page, site) {
-  for (let attempt = 0; attempt < 150; attempt += 1) {
-    const found = (await mails()).find((m) => JSON.stringify(m).includes(site));
-    if (found) return found;
-    await page.waitForTimeout(200);
-  }
-  throw new Error(`No mail about ${site} reached the fake SMTP inbox in 30 s`);
 }
 
 /** Syncs the inspector's tablet from the case page and waits until nothing is left to send. */

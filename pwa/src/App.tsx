@@ -14,6 +14,7 @@ import type { SessionStore } from './features/session/sessionStore';
 
 const SignInPage = lazyPage(() => import('./pages/SignInPage'));
 const TabsLayout = lazyPage(() => import('./pages/TabsLayout'));
+const SetPasswordPage = lazyPage(() => import('./pages/SetPasswordPage'));
 
 /**
  * Lets a usable session (online, or offline within its period) through; everything else goes to
@@ -56,6 +57,8 @@ export function App({ queryClient, apiClient, sessionStore, offlineSessionHours,
               <IonReactRouter>
                 <IonRouterOutlet>
                   <Route path="/signin" element={<SignInPage />} />
+                  {/* Public: the page an invitation mail links to, for someone not signed in yet. */}
+                  <Route path="/set-password" element={<SetPasswordPage />} />
                   <Route
                     path="/tabs/*"
                     element={

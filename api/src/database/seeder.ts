@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm';
 import { PasswordService } from '../users/password.service';
-import { passwordPolicyProblem } from '../users/password-policy';
+import { passwordPolicyProblem } from '@siteband/shared';
 import { User } from '../users/user.entity';
 import { DEMO_USERS } from './seed-data';
 

@@ -1,6 +1,6 @@
 import { useEffect, useRef, useState, type FormEvent } from 'react';
 import { IonButton, IonContent, IonInput, IonPage } from '@ionic/react';
-import { useNavigate } from 'react-router-dom';
+import { useNavigate, useSearchParams } from 'react-router-dom';
 import { useTranslation } from 'react-i18next';
 import { BrandMark } from '../components/BrandMark';
 import { ConnectionBadge } from '../components/ConnectionBadge';
@@ -14,6 +14,8 @@ import { formatHours } from '../i18n/format';
 export default function SignInPage() {
   const { t, i18n } = useTranslation();
   const navigate = useNavigate();
+  // Set by the set-password page of an invitation once the password is set.
+  const passwordSet = useSearchParams()[0].get('passwordSet') === '1';
   const online = useOnlineStatus();
   const { session, status, signIn, signOut, offlineSessionHours } = useSession();
   const [email, setEmail] = useState('');
@@ -83,6 +85,11 @@ export default function SignInPage() {
               {t('signIn.title')}
             </h1>
             <p className="sb-muted">{t('signIn.intro', { hours: formatHours(offlineSessionHours, i18n.language) })}</p>
+            {passwordSet && (
+              <p className="sb-success" role="status">
+                {t('invite.setDone')}
+              </p>
+            )}
             {sessionEnded && (
               <p className="sb-notice" role="status">
                 {t('signIn.expired')} {!online && t('signIn.expiredOffline')}

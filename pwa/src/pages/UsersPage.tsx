@@ -5,6 +5,7 @@ import type { Role } from '@siteband/shared';
 import { useTranslation } from 'react-i18next';
 import { PageShell } from '../components/PageShell';
 import { CreateUserForm } from '../components/users/CreateUserForm';
+import { InviteUserForm } from '../components/users/InviteUserForm';
 import { UserRow } from '../components/users/UserRow';
 import { useApiClient } from '../features/api/ApiClientContext';
 import { useOnlineStatus } from '../features/network/onlineStatus';
@@ -80,6 +81,13 @@ export default function UsersPage() {
         {users.data?.some((u) => String(u.id) === String(session?.user.id)) && (
           <p className="sb-muted">{t('pages.users.selfHint')}</p>
         )}
+      </section>
+      <section className="sb-panel" aria-labelledby="invite-user-heading">
+        <h2 id="invite-user-heading" className="sb-panel__heading">
+          {t('invite.heading')}
+        </h2>
+        <p className="sb-muted">{t('invite.intro')}</p>
+        <InviteUserForm />
       </section>
       <section className="sb-panel" aria-labelledby="create-user-heading">
         <h2 id="create-user-heading" className="sb-panel__heading">

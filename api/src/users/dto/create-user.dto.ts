@@ -1,9 +1,8 @@
 import { ApiProperty } from '@nestjs/swagger';
-import { ROLES, type Role } from '@siteband/shared';
+import { MAX_PASSWORD_BYTES, MIN_PASSWORD_LENGTH, ROLES, type Role } from '@siteband/shared';
 import { Transform } from 'class-transformer';
 import { IsEmail, IsIn, IsString, Length, MaxLength } from 'class-validator';
 import { normalizeEmail } from '../email';
-import { MAX_PASSWORD_BYTES, MIN_PASSWORD_LENGTH } from '../password-policy';
 import { IsPassword } from './is-password.decorator';
 
 /** An administrator adds a user. */

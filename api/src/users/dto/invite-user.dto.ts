@@ -1,6 +1,6 @@
 import { ApiProperty, OmitType } from '@nestjs/swagger';
 import { IsString, Length } from 'class-validator';
-import { MAX_PASSWORD_BYTES, MIN_PASSWORD_LENGTH } from '../password-policy';
+import { MAX_PASSWORD_BYTES, MIN_PASSWORD_LENGTH } from '@siteband/shared';
 import { CreateUserDto } from './create-user.dto';
 import { IsPassword } from './is-password.decorator';
 

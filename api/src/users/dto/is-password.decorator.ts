@@ -1,5 +1,5 @@
 import { registerDecorator, type ValidationOptions } from 'class-validator';
-import { passwordPolicyProblem } from '../password-policy';
+import { passwordPolicyProblem } from '@siteband/shared';
 
 /** Validates a new password against the one password policy. */
 export function IsPassword(options?: ValidationOptions): PropertyDecorator {

@@ -13,6 +13,11 @@ export function login(client: ApiClient, credentials: Credentials): Promise<Auth
   return client.request<AuthResponse>('/api/auth/login', { method: 'POST', body: credentials, auth: false });
 }
 
+/** Sets a password from an invitation's single-use token (public: the person is not signed in yet). */
+export function setPassword(client: ApiClient, token: string, password: string): Promise<unknown> {
+  return client.request<unknown>('/api/auth/set-password', { method: 'POST', body: { token, password }, auth: false });
+}
+
 /** Revokes the session's refresh token on the server (the call itself needs the access token). */
 export function logout(client: ApiClient): Promise<void> {
   return client.request<void>('/api/auth/logout', {

@@ -14,6 +14,9 @@ export interface CreateUserInput {
   password: string;
 }
 
+/** Body of POST /api/users/invitations. */
+export type InviteUserInput = Omit<CreateUserInput, 'password'>;
+
 /** Body of PATCH /api/users/:id. */
 export interface UpdateUserInput {
   displayName?: string;

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useApiClient } from '../api/ApiClientContext';
-import { createUser, updateUser, usersKeys } from './usersApi';
-import type { AdminUser, CreateUserInput, UpdateUserInput } from './types';
+import { createUser, inviteUser, updateUser, usersKeys } from './usersApi';
+import type { AdminUser, CreateUserInput, InviteUserInput, UpdateUserInput } from './types';
 
 /** Creates a user, then reloads the list. */
 export function useCreateUser() {
@@ -9,6 +9,16 @@ export function useCreateUser() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: CreateUserInput) => createUser(client, input),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: usersKeys.all }),
+  });
+}
+
+/** Invites a person by e-mail, then reloads the list (the invited person is listed at once). */
+export function useInviteUser() {
+  const client = useApiClient();
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: InviteUserInput) => inviteUser(client, input),
     onSettled: () => queryClient.invalidateQueries({ queryKey: usersKeys.all }),
   });
 }

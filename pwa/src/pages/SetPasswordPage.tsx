@@ -1,0 +1,111 @@
+import { useEffect, useRef, useState, type FormEvent } from 'react';
+import { IonButton, IonContent, IonInput, IonPage } from '@ionic/react';
+import { MAX_PASSWORD_BYTES, MIN_PASSWORD_LENGTH, passwordPolicyBreach } from '@siteband/shared';
+import { useTranslation } from 'react-i18next';
+import { useNavigate, useSearchParams } from 'react-router-dom';
+import { BrandMark } from '../components/BrandMark';
+import { ConnectionBadge } from '../components/ConnectionBadge';
+import { useApiClient } from '../features/api/ApiClientContext';
+import { ApiError } from '../features/api/apiError';
+import { setPassword } from '../features/session/authApi';
+
+/** The public page an invitation mail links to: choose a password with the link's single-use token. */
+export default function SetPasswordPage() {
+  const { t } = useTranslation();
+  const client = useApiClient();
+  const navigate = useNavigate();
+  const [params] = useSearchParams();
+  const token = params.get('token') ?? '';
+  const [password, setPasswordText] = useState('');
+  const [repeat, setRepeat] = useState('');
+  const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<string>();
+  const [linkRefused, setLinkRefused] = useState(false);
+  const errorRef = useRef<HTMLParagraphElement>(null);
+
+  useEffect(() => {
+    document.title = t('app.documentTitle', { page: t('invite.setTitle') });
+  }, [t]);
+
+  useEffect(() => {
+    if (error) errorRef.current?.focus();
+  }, [error]);
+
+  async function submit(event: FormEvent) {
+    event.preventDefault();
+    setError(undefined);
+    // The shared password rule is the API's own, so a 400 for a password passing it is about the link.
+    const breach = passwordPolicyBreach(password);
+    if (breach) return setError(t(`invite.${breach}`, { min: MIN_PASSWORD_LENGTH, max: MAX_PASSWORD_BYTES }));
+    if (password !== repeat) return setError(t('invite.noMatch'));
+    setBusy(true);
+    try {
+      await setPassword(client, token, password);
+      navigate('/signin?passwordSet=1', { replace: true });
+    } catch (caught) {
+      if (caught instanceof ApiError && caught.status === 400) setLinkRefused(true);
+      else setError(t('invite.setError', { message: caught instanceof Error ? caught.message : String(caught) }));
+    } finally {
+      setBusy(false);
+    }
+  }
+
+  const refusal = !token ? t('invite.noToken') : linkRefused ? t('invite.linkRefused') : undefined;
+
+  return (
+    <IonPage>
+      <IonContent className="sb-signin">
+        <main className="sb-signin__layout">
+          <div className="sb-signin__top">
+            <BrandMark size={56} />
+            <ConnectionBadge />
+          </div>
+          <section className="sb-panel sb-signin__card" aria-labelledby="set-password-title">
+            <h1 id="set-password-title" className="sb-page-title">
+              {t('invite.setTitle')}
+            </h1>
+            {refusal ? (
+              <p className="sb-error" role="alert" data-testid="set-password-refused">
+                {refusal}
+              </p>
+            ) : (
+              <form onSubmit={submit} noValidate>
+                <p className="sb-muted">{t('invite.setIntro', { min: MIN_PASSWORD_LENGTH })}</p>
+                <IonInput
+                  className="sb-input"
+                  label={t('invite.newPassword')}
+                  labelPlacement="stacked"
+                  fill="outline"
+                  type="password"
+                  autocomplete="new-password"
+                  name="new-password"
+                  value={password}
+                  onIonInput={(e) => setPasswordText(String(e.detail.value ?? ''))}
+                />
+                <IonInput
+                  className="sb-input"
+                  label={t('invite.repeatPassword')}
+                  labelPlacement="stacked"
+                  fill="outline"
+                  type="password"
+                  autocomplete="new-password"
+                  name="repeat-password"
+                  value={repeat}
+                  onIonInput={(e) => setRepeat(String(e.detail.value ?? ''))}
+                />
+                {error && (
+                  <p className="sb-error" role="alert" tabIndex={-1} ref={errorRef}>
+                    {error}
+                  </p>
+                )}
+                <IonButton type="submit" expand="block" className="sb-primary" disabled={busy}>
+                  {busy ? t('invite.setting') : t('invite.setSubmit')}
+                </IonButton>
+              </form>
+            )}
+          </section>
+        </main>
+      </IonContent>
+    </IonPage>
+  );
+}
