@@ -112,7 +112,7 @@ export function identifyTests({ baseUrl, password }) {
       const acknowledge = page.getByRole('button', { name: 'Acknowledge and mark reviewed by inspector' });
       assert.equal(await acknowledge.last().isDisabled(), true, 'the button waits for the checkbox');
       await page.getByLabel(/I have read the caution cards/).check();
-      assert.equal(await acknowledge.last().isDisabled(), false);
+      // The button enables on the checkbox's change event: click() waits for it to become enabled.
       await acknowledge.last().click();
       await page.getByTestId('acknowledged').last().waitFor();
     });

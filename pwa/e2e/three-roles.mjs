@@ -13,7 +13,6 @@ import { blockingViolations } from './axe.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
 import { readCapture, waitForSynced } from './capture.mjs';
 import { waitForMail } from './inbox.mjs';
-import { apiToken } from './fieldCase.mjs';
 import { signInTo, waitForPage } from './shell.mjs';
 
 const SPECTRA = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'fixtures', 'spectra');
@@ -88,25 +87,26 @@ export function threeRoleTests({ baseUrl, password }) {
       assert.equal(local.escalations.filter((e) => e.data.caseId === caseId).length, 1, 'the hazardous scan raised one escalation');
     });
 
-    it('the safety officer is mailed and acknowledges the escalation; the inspector sees it after sync', async () => {
+    it('the safety officer is mailed, finds the escalation in the inbox and acknowledges it; the inspector sees it after sync', async () => {
       const { page: so } = officer;
       const mail = await waitForMail(so, site);
       const text = JSON.stringify(mail);
       assert.match(text, /Ammonium nitrate/, 'the mail names the compound');
       assert.match(text, /\/tabs\/escalations\//, 'the mail links into the app');
 
-      // The safety officer acknowledges through the API here, with the action taken and the PPE level.
-      const token = await apiToken(baseUrl, 'safety@demo.test', password);
-      const auth = { Authorization: `Bearer ${token}` };
-      const raised = await (await fetch(`${baseUrl}/api/escalations?status=raised&pageSize=100`, { headers: auth })).json();
-      const escalation = raised.items.find((e) => e.caseId === caseId);
-      assert.ok(escalation, 'the escalation is raised on the server');
-      const ack = await fetch(`${baseUrl}/api/escalations/${escalation.id}/acknowledge`, {
-        method: 'POST',
-        headers: { ...auth, 'Content-Type': 'application/json' },
-        body: JSON.stringify({ actionTaken: 'ppe_required', ppeLevel: 'B', comment: 'Level B for anyone near bay C', baseVersion: escalation.version }),
-      });
-      assert.ok(ack.ok, `acknowledge answered ${ack.status}`);
+      await signInTo(so, baseUrl, 'safety@demo.test', password, 'Escalations');
+      await so.getByTestId('inbox-filter-raised').filter({ visible: true }).click();
+      const card = so.locator('[data-testid^="escalation-"]').filter({ hasText: site });
+      await card.waitFor({ timeout: 30_000 });
+      await card.click();
+      await waitForPage(so, 'Escalation');
+      const form = so.getByTestId('acknowledge-form').filter({ visible: true });
+      await form.getByLabel('PPE required').check();
+      await form.getByLabel('Level B').check();
+      await form.getByLabel('Comment (optional)').fill('Level B for anyone near bay C');
+      await form.getByRole('button', { name: 'Acknowledge escalation' }).click();
+      await so.getByTestId('acknowledgement').filter({ visible: true }).waitFor();
+      await screenshot(so, 'three-roles-safety-acknowledged');
 
       const { page } = inspector;
       await syncNow(page);
@@ -146,8 +146,7 @@ export function threeRoleTests({ baseUrl, password }) {
       await assertAccessible(page, 'the returned case, inspector');
       await screenshot(page, 'three-roles-inspector-returned-800x1280');
       await page.getByTestId('case-submit-toggle').filter({ visible: true }).filter({ hasText: 'Reopen to fix' }).click();
-      // The reopening reaches the server before the fix: a returned case takes no other change.
-      await syncNow(page);
+      // Reopen, fix and resubmit before the next sync: the tablet queues the moves in order.
       await page.getByLabel('New site note', { exact: true }).filter({ visible: true }).fill('Seal number of TR-01: SB-009913, intact.');
       await page.getByRole('button', { name: 'Add note' }).filter({ visible: true }).click();
       await page.getByTestId('site-note').filter({ hasText: 'SB-009913' }).waitFor();

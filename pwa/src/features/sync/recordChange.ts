@@ -14,11 +14,22 @@ export interface RecordEdit<D> {
 }
 
 /**
+ * True when the edit moves a case to another status than its unsent change carries. Such a move is a
+ * change of its own, queued after whatever the inspector did in between: absorbing it would send a
+ * reopen-then-resubmit as one submit (refused from returned), or a new case as already submitted
+ * before its samples (refused too, since only open cases take records).
+ */
+function movesCaseStatus(edit: RecordEdit<object>, unsentData: Record<string, unknown> | undefined): boolean {
+  return edit.entity === 'case' && unsentData?.status !== (edit.data as { status?: unknown }).status;
+}
+
+/**
  * Saves a record and its change for the server in ONE transaction: if the tab closes or the
  * battery dies between the two writes, the tablet would otherwise hold an edit the server never
  * hears of (or a change for a record that is not there). A change not yet sent absorbs the new
  * edit, because upserts carry the whole record and the server must not see two changes built on
- * the same base version.
+ * the same base version (the sender takes one change per record per batch, so a queued status move
+ * gets the version of the change before it).
  */
 export async function recordUpsert<D extends object>(db: SitebandDb, edit: RecordEdit<D>, now = Date.now()): Promise<void> {
   const table = tableFor(db, edit.entity);
@@ -38,8 +49,8 @@ export async function recordUpsert<D extends object>(db: SitebandDb, edit: Recor
     const entries = await entriesFor(db, edit.entity, edit.id);
     // A refused change is superseded by this whole-record edit; its reason goes with it.
     await db.outbox.bulkDelete(entries.filter((e) => e.status === 'rejected').map((e) => e.seq!));
-    const unsent = entries.find((e) => e.status === 'pending');
-    if (unsent) {
+    const unsent = entries.findLast((e) => e.status === 'pending');
+    if (unsent && !movesCaseStatus(edit, unsent.data)) {
       await db.outbox.update(unsent.seq!, { data: edit.data as Record<string, unknown> });
     } else {
       await db.outbox.add({

@@ -82,6 +82,33 @@ describe('recording a change', () => {
 });
 
 describe('pushing the outbox', () => {
+  it('queues a status move as a change of its own, after the records made before it', async () => {
+    const d = await fresh();
+    // As on the server: only an open case takes samples.
+    let caseStatus: unknown = null;
+    const server = createTestServer({
+      rejectIf: (change) => {
+        if (change.entity === 'case') caseStatus = change.data?.status;
+        return change.entity === 'sample' && caseStatus !== 'open' ? 'the case is not open' : undefined;
+      },
+    });
+    const caseId = crypto.randomUUID();
+    await saveCase(d, caseId, caseData());
+    await saveSample(d, crypto.randomUUID(), sampleData(caseId, 'S-1'));
+    await saveCase(d, caseId, caseData({ status: 'submitted' }));
+    await saveCase(d, caseId, caseData({ status: 'submitted', weatherNotes: 'Drizzle' }));
+    expect((await d.outbox.orderBy('seq').toArray()).map((e) => [e.entity, e.data.status ?? null])).toEqual([
+      ['case', 'open'],
+      ['sample', null],
+      ['case', 'submitted'],
+    ]);
+    expect(await pushOutbox(d, clientFor(server), 'tablet-test')).toBe(3);
+    expect(server.pushes.map((batch) => batch.map((c) => c.entity))).toEqual([['case', 'sample'], ['case']]);
+    expect(server.pushes[1][0]).toMatchObject({ baseVersion: 1, data: { status: 'submitted', weatherNotes: 'Drizzle' } });
+    expect(await d.outbox.count()).toBe(0);
+    expect(await d.cases.get(caseId)).toMatchObject({ version: 2, sync: 'server' });
+  });
+
   it('sends at most 200 changes per batch, parents first, and marks every record on server', async () => {
     const d = await fresh();
     const server = createTestServer();
