@@ -192,8 +192,42 @@ export function escalationTests({ baseUrl, password }) {
       assert.match(so.url(), /status=raised/);
       await assertAccessible(so, 'the inbox filtered');
       await screenshot(so, 'safety-inbox-closed-filter');
+    });
+
+    it('an escalation the inspector raises by hand, offline, reaches the inbox after sync', async () => {
+      const { page, context } = inspector;
+      const reason = 'Second drum bulging and hissing at the bung (demo)';
+      await page.goto(`${baseUrl}/tabs/cases/${caseId}`);
+      await waitForPage(page, site);
+      await context.setOffline(true);
+      const panel = page.getByTestId('raise-escalation').filter({ visible: true });
+      await panel.getByRole('button', { name: 'Raise escalation' }).click();
+      assert.equal((await panel.getByRole('alert').textContent()).trim(), 'Write what you see first.');
+      await panel.getByLabel('What you see and why it is dangerous').fill(reason);
+      await panel.locator('summary').click();
+      await panel.getByLabel('Flammable gas', { exact: true }).check();
+      await panel.getByRole('button', { name: 'Raise escalation' }).click();
+      await panel.getByTestId('escalation-raised').waitFor();
+      await page.getByTestId('case-escalations').filter({ visible: true }).filter({ hasText: reason }).waitFor();
+      await assertAccessible(page, 'the case page with an escalation raised by hand, offline');
+      await screenshot(page, 'inspector-escalation-raised-by-hand-800x1280');
+      await context.setOffline(false);
+      await page.getByTestId('connection-status').filter({ visible: true }).filter({ hasText: 'Online' }).waitFor();
+      await page.getByTestId('sync-now').filter({ visible: true }).click();
+
+      const token = await apiToken(baseUrl, 'safety@demo.test', password);
+      let found;
+      for (let i = 0; i < 150 && !found; i += 1) {
+        const raised = await (await fetch(`${baseUrl}/api/escalations?status=raised&pageSize=100`, { headers: { Authorization: `Bearer ${token}` } })).json();
+        found = raised.items.find((e) => e.reason === reason);
+        if (!found) await page.waitForTimeout(200);
+      }
+      assert.ok(found, 'the escalation raised by hand is on the server');
+      assert.deepEqual(found.hazardClasses, ['flammable-gas']);
+      const { page: so } = officer;
+      await so.getByTestId(`escalation-${found.id}`).filter({ visible: true }).waitFor({ timeout: 30_000 });
       await signOut(so);
-      await signOut(inspector.page);
+      await signOut(page);
     });
   });
 }

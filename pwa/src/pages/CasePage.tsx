@@ -16,6 +16,7 @@ import { caseIsOpen, inspectorNextStatus, saveCase } from '../features/cases/sav
 import { useCaseOutcome } from '../features/cases/useCaseOutcome';
 import { CaseEscalationsPanel } from '../components/cases/CaseEscalationsPanel';
 import { CaseReviewPanel } from '../components/cases/CaseReviewPanel';
+import { RaiseEscalationPanel } from '../components/escalations/RaiseEscalationPanel';
 import { useCase } from '../features/cases/useCases';
 
 /** One case: the visit, its samples, site notes, conflicts, sync, and submit or reopen. */
@@ -76,6 +77,7 @@ export default function CasePage() {
       </section>
       {outcome && <CaseReviewPanel row={row} outcome={outcome} />}
       {outcome && <CaseEscalationsPanel outcome={outcome} />}
+      {open && <RaiseEscalationPanel caseId={id} />}
       <section className="sb-panel" aria-labelledby="samples-heading">
         <h2 id="samples-heading" className="sb-panel__heading">
           {t('capture.sample.listHeading')}
