@@ -75,14 +75,22 @@ export function readCapture() {
   });
 }
 
-/** Waits until the outbox is empty and every photo's bytes are verified by the server (up to 30 s). */
+/**
+ * True for a file this tablet holds bytes of that the server has not verified yet. A file pulled as
+ * metadata only (its bytes are on another tablet, still to come) is not this tablet's to send.
+ */
+const waitsForUpload = (p) => p.byteLength !== undefined && !p.uploadedAt;
+
+/** Waits until the outbox is empty and the server has verified every file this tablet holds (up to 30 s). */
 export async function waitForSynced(page) {
   for (let attempt = 0; attempt < 150; attempt += 1) {
     const local = await page.evaluate(readCapture);
-    if (local.outbox.length === 0 && local.photos.every((p) => p.uploadedAt)) return local;
+    if (local.outbox.length === 0 && !local.photos.some(waitsForUpload)) return local;
     await page.waitForTimeout(200);
   }
-  throw new Error(`Not synced after 30 s: ${JSON.stringify((await page.evaluate(readCapture)).outbox)}`);
+  const local = await page.evaluate(readCapture);
+  const waiting = local.photos.filter(waitsForUpload).map(({ id, sync, uploadRefused, rejectedReason }) => ({ id, sync, uploadRefused, rejectedReason }));
+  throw new Error(`Not synced after 30 s: outbox ${JSON.stringify(local.outbox)}, files not on the server ${JSON.stringify(waiting)}`);
 }
 
 export function captureTests({ baseUrl, password }) {
