@@ -1,7 +1,8 @@
-import { useId, useState, type FormEvent } from 'react';
+import { useState, type FormEvent } from 'react';
 import { IonButton, IonInput } from '@ionic/react';
-import { ROLES, type Role } from '@siteband/shared';
+import type { Role } from '@siteband/shared';
 import { useTranslation } from 'react-i18next';
+import { PersonFields } from './PersonFields';
 import { useCreateUser } from '../../features/users/useUserMutations';
 
 const EMPTY = { displayName: '', email: '', role: 'inspector' as Role, password: '' };
@@ -9,7 +10,6 @@ const EMPTY = { displayName: '', email: '', role: 'inspector' as Role, password:
 /** The admin's form to add a person with a role and a first password. */
 export function CreateUserForm() {
   const { t } = useTranslation();
-  const roleId = useId();
   const create = useCreateUser();
   const [form, setForm] = useState(EMPTY);
   const [message, setMessage] = useState<{ kind: 'ok' | 'error'; text: string }>();
@@ -33,40 +33,11 @@ export function CreateUserForm() {
 
   return (
     <form onSubmit={submit} noValidate className="sb-form-grid" aria-labelledby="create-user-heading">
-      <IonInput
-        className="sb-input"
-        label={t('pages.users.displayName')}
-        labelPlacement="stacked"
-        fill="outline"
-        autocomplete="off"
-        value={form.displayName}
-        onIonInput={(e) => setForm({ ...form, displayName: String(e.detail.value ?? '') })}
+      <PersonFields
+        value={form}
+        onChange={setForm}
+        labels={{ displayName: t('pages.users.displayName'), email: t('pages.users.email'), role: t('pages.users.role') }}
       />
-      <IonInput
-        className="sb-input"
-        label={t('pages.users.email')}
-        labelPlacement="stacked"
-        fill="outline"
-        type="email"
-        autocomplete="off"
-        value={form.email}
-        onIonInput={(e) => setForm({ ...form, email: String(e.detail.value ?? '') })}
-      />
-      <div className="sb-field">
-        <label htmlFor={roleId}>{t('pages.users.role')}</label>
-        <select
-          id={roleId}
-          className="sb-select"
-          value={form.role}
-          onChange={(e) => setForm({ ...form, role: e.target.value as Role })}
-        >
-          {ROLES.map((role) => (
-            <option key={role} value={role}>
-              {t(`roles.${role}`)}
-            </option>
-          ))}
-        </select>
-      </div>
       <IonInput
         className="sb-input"
         label={t('pages.users.password')}

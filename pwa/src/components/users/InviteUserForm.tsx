@@ -1,7 +1,8 @@
-import { useId, useState, type FormEvent } from 'react';
-import { IonButton, IonInput } from '@ionic/react';
-import { ROLES, type Role } from '@siteband/shared';
+import { useState, type FormEvent } from 'react';
+import { IonButton } from '@ionic/react';
+import type { Role } from '@siteband/shared';
 import { useTranslation } from 'react-i18next';
+import { PersonFields } from './PersonFields';
 import { ApiError } from '../../features/api/apiError';
 import { useInviteUser } from '../../features/users/useUserMutations';
 
@@ -10,7 +11,6 @@ const EMPTY = { displayName: '', email: '', role: 'inspector' as Role };
 /** The admin's form to invite a person by e-mail: they set their own password from the mailed link. */
 export function InviteUserForm() {
   const { t } = useTranslation();
-  const roleId = useId();
   const invite = useInviteUser();
   const [form, setForm] = useState(EMPTY);
   const [message, setMessage] = useState<{ kind: 'ok' | 'error'; text: string }>();
@@ -33,35 +33,11 @@ export function InviteUserForm() {
 
   return (
     <form onSubmit={submit} noValidate className="sb-form-grid" aria-labelledby="invite-user-heading" data-testid="invite-form">
-      <IonInput
-        className="sb-input"
-        label={t('invite.displayName')}
-        labelPlacement="stacked"
-        fill="outline"
-        autocomplete="off"
-        value={form.displayName}
-        onIonInput={(e) => setForm({ ...form, displayName: String(e.detail.value ?? '') })}
+      <PersonFields
+        value={form}
+        onChange={setForm}
+        labels={{ displayName: t('invite.displayName'), email: t('invite.email'), role: t('invite.role') }}
       />
-      <IonInput
-        className="sb-input"
-        label={t('invite.email')}
-        labelPlacement="stacked"
-        fill="outline"
-        type="email"
-        autocomplete="off"
-        value={form.email}
-        onIonInput={(e) => setForm({ ...form, email: String(e.detail.value ?? '') })}
-      />
-      <div className="sb-field">
-        <label htmlFor={roleId}>{t('invite.role')}</label>
-        <select id={roleId} className="sb-select" value={form.role} onChange={(e) => setForm({ ...form, role: e.target.value as Role })}>
-          {ROLES.map((role) => (
-            <option key={role} value={role}>
-              {t(`roles.${role}`)}
-            </option>
-          ))}
-        </select>
-      </div>
       <div className="sb-form-grid__wide">
         {message && (
           <p className={message.kind === 'ok' ? 'sb-success' : 'sb-error'} role={message.kind === 'ok' ? 'status' : 'alert'}>
