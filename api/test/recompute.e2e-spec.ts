@@ -95,6 +95,12 @@ describe('Server recomputation of synced scans (e2e, MariaDB + S3 fake)', () => 
     const pulled = (await pullAll(t, supervisor)).changes.find((c) => c.entity === 'scan' && c.id === scanId);
     expect(pulled?.version).toBe(1);
     expect(pulled?.data).toMatchObject({ serverResult: computed, resultMismatch: false, serverRecomputeError: null });
+
+    // The audit trail records the server's own write, with no actor, beside the tablet's create.
+    const admin = (await signIn(t, DEMO.admin)).accessToken;
+    const audit = await t.http().get('/api/audit').query({ entity: 'scan', entityId: scanId }).set('Authorization', `Bearer ${admin}`).expect(200);
+    expect(audit.body.items.map((e: Record<string, unknown>) => e.action)).toEqual(['recompute', 'create']);
+    expect(audit.body.items[0]).toMatchObject({ actorId: null, actorRole: null, caseId, before: { serverRecomputedAt: null }, after: { resultMismatch: false, serverRecomputeError: null } });
   });
 
   it('flags a tablet result with another top candidate, describing the difference and keeping the tablet’s result', async () => {

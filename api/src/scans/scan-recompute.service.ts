@@ -2,6 +2,7 @@ import { isDeepStrictEqual } from 'node:util';
 import { Injectable, Logger } from '@nestjs/common';
 import { DataSource } from 'typeorm';
 import { Attachment } from '../attachments/attachment.entity';
+import { AuditService } from '../audit/audit.service';
 import { IdentifyService } from '../identify/identify.service';
 import { lockSyncCounter, takeSyncSeq } from '../sync/sync-sequence';
 import { compareIdentifications } from './identification-comparison';
@@ -12,6 +13,19 @@ import { Scan } from './scan.entity';
 
 /** The server-owned fields a recomputation writes on a scan. */
 type RecomputedFields = Pick<Scan, 'serverResult' | 'resultMismatch' | 'mismatch' | 'serverRecomputedAt' | 'serverRecomputeError'>;
+
+/**
+ * What the audit trail keeps of a recomputation: the outcome, not the whole server result (which stays
+ * on the scan and is covered by the scan's own entries when the tablet changes it).
+ */
+function auditedOutcome(scan: RecomputedFields): Record<string, unknown> {
+  return {
+    resultMismatch: scan.resultMismatch,
+    mismatch: scan.mismatch,
+    serverRecomputedAt: scan.serverRecomputedAt?.toISOString() ?? null,
+    serverRecomputeError: scan.serverRecomputeError,
+  };
+}
 
 /** Longest failure message kept on a scan (the column's size). */
 const MAX_ERROR_CHARS = 1000;
@@ -28,6 +42,7 @@ export class ScanRecomputeService {
     private readonly dataSource: DataSource,
     private readonly rawFiles: RawScanFiles,
     private readonly identify: IdentifyService,
+    private readonly audit: AuditService,
   ) {}
 
   /**
@@ -88,8 +103,20 @@ export class ScanRecomputeService {
         current.serverRecomputeError === fields.serverRecomputeError &&
         (current.serverRecomputedAt === null) === (fields.serverRecomputedAt === null);
       if (same) return;
+      const before = auditedOutcome(current);
       Object.assign(current, fields, { syncSeq: await takeSyncSeq(manager, counter) });
       await manager.save(Scan, current);
+      // The server's own work: no actor. Taken after the sync counter, as every writer does.
+      await this.audit.record(manager, {
+        actorId: null,
+        actorRole: null,
+        entity: 'scan',
+        entityId: current.id,
+        caseId: current.caseId,
+        action: 'recompute',
+        before,
+        after: auditedOutcome(current),
+      });
     });
   }
 }

@@ -1,4 +1,5 @@
 import { Module } from '@nestjs/common';
+import { AuditModule } from '../audit/audit.module';
 import { IdentifyModule } from '../identify/identify.module';
 import { StorageModule } from '../storage/storage.module';
 import { RawScanFiles } from './raw-scan-files';
@@ -7,7 +8,7 @@ import { ScanRecomputeService } from './scan-recompute.service';
 
 /** Server-side recomputation of synced scans' identifications (the records themselves travel through sync). */
 @Module({
-  imports: [IdentifyModule, StorageModule],
+  imports: [AuditModule, IdentifyModule, StorageModule],
   providers: [ScanRecomputeService, ScanRecomputeQueue, RawScanFiles],
   exports: [ScanRecomputeQueue, RawScanFiles],
 })
