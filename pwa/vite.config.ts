@@ -3,6 +3,7 @@ import react from '@vitejs/plugin-react';
 import { VitePWA } from 'vite-plugin-pwa';
 import { webManifest } from './pwa-manifest.ts';
 import { precompress } from './precompress.ts';
+import { preloadFonts } from './preloadFonts.ts';
 import { parseOfflineSessionHours } from './src/config/offlineSessionHours.ts';
 import { parseIdleLockMinutes } from './src/config/idleLockMinutes.ts';
 
@@ -36,6 +37,7 @@ export default defineConfig({
         importScripts: ['/share-target-sw.js'],
       },
     }),
+    preloadFonts(),
     precompress(),
   ],
   build: {

@@ -11,8 +11,10 @@ import { IdleLockProvider } from './features/lock/IdleLockProvider';
 import { homePathForRole } from './features/navigation/roleTabs';
 import { SessionProvider, useSession } from './features/session/SessionProvider';
 import type { SessionStore } from './features/session/sessionStore';
+// The page a signed-out visit opens first comes with the entry chunk: loading it lazily would add a
+// round trip before anything is drawn. Every other screen loads when it is first opened.
+import SignInPage from './pages/SignInPage';
 
-const SignInPage = lazyPage(() => import('./pages/SignInPage'));
 const TabsLayout = lazyPage(() => import('./pages/TabsLayout'));
 const SetPasswordPage = lazyPage(() => import('./pages/SetPasswordPage'));
 

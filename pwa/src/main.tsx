@@ -44,8 +44,9 @@ async function start(): Promise<void> {
       />
     </StrictMode>,
   );
-  // The service worker precaches the shell so a reload without network still renders it.
-  registerSW({ immediate: true });
+  // The service worker precaches the shell so a reload without network still renders it. It is
+  // registered at the window's load event, so its precache downloads do not compete with first paint.
+  registerSW();
 }
 
 start().catch((error: unknown) => {
