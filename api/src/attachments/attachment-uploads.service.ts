@@ -76,15 +76,16 @@ export class AttachmentUploadsService {
     }
 
     const bytes = await readExactly(chunk.body, range.end - range.start + 1);
+    // The last chunk (or the whole file in one) completes the upload at once, without being staged.
+    if (range.end + 1 === row.size) return this.complete(row, range.start, bytes);
     await this.storage.put(chunkKey(id, range.start), bytes, 'application/octet-stream');
     const moved = await this.dataSource.transaction(async (manager) => {
       // Under the sync lock, so a metadata change pushed at the same moment cannot write back a stale offset.
       await lockSyncCounter(manager);
       return manager.update(Attachment, { id, receivedBytes: range.start }, { receivedBytes: range.start + bytes.length });
     });
-    if (moved.affected !== 1) throw new ConflictException(`Another upload of ${id} moved on meanwhile: ask for its status and resume from there`);
+    if (moved.affected !== 1) throw movedOn(id);
     row.receivedBytes = range.start + bytes.length;
-    if (row.receivedBytes === row.size) await this.complete(row);
     return AttachmentStatusDto.fromEntity(row);
   }
 
@@ -100,42 +101,53 @@ export class AttachmentUploadsService {
     });
   }
 
-  /** Assembles the chunks, checks the SHA-256, stores the file and marks the attachment uploaded. */
-  private async complete(row: Attachment): Promise<void> {
+  /**
+   * Assembles the staged chunks before `start` with the last chunk's bytes, checks the SHA-256, stores the
+   * file and marks the attachment uploaded in one write (which also moves `receivedBytes` to the end).
+   */
+  private async complete(row: Attachment, start: number, last: Buffer): Promise<AttachmentStatusDto> {
     const parts: Buffer[] = [];
     // Walk the chunk offsets rather than listing: a chunk whose database update failed is replaced by its retry.
-    for (let offset = 0; offset < row.size; ) {
+    for (let offset = 0; offset < start; ) {
       const part = await this.storage.read(chunkKey(row.id, offset));
       if (part.length === 0) break;
       parts.push(part);
       offset += part.length;
     }
-    const file = Buffer.concat(parts);
+    const file = Buffer.concat([...parts, last]);
     const actual = createHash('sha256').update(file).digest('hex');
     if (file.length !== row.size || actual !== row.sha256) {
-      await this.storage.deletePrefix(stagingPrefix(row.id));
-      await this.dataSource.transaction(async (manager) => {
-        await lockSyncCounter(manager);
-        await manager.update(Attachment, { id: row.id }, { receivedBytes: 0 });
-      });
-      row.receivedBytes = 0;
+      // A file sent whole was never staged and left receivedBytes at 0: there is nothing to discard.
+      if (start > 0) {
+        await this.storage.deletePrefix(stagingPrefix(row.id));
+        await this.dataSource.transaction(async (manager) => {
+          await lockSyncCounter(manager);
+          await manager.update(Attachment, { id: row.id }, { receivedBytes: 0 });
+        });
+        row.receivedBytes = 0;
+      }
       throw new UnprocessableEntityException(
         `The received file has SHA-256 ${actual}, not the declared ${row.sha256}: nothing was kept; upload it again from byte 0`,
       );
     }
     const key = fileKey(row.caseId, row.id);
     await this.storage.put(key, file, row.contentType);
-    await this.dataSource.transaction(async (manager) => {
+    const uploadedAt = new Date();
+    const moved = await this.dataSource.transaction(async (manager) => {
       const counter = await lockSyncCounter(manager);
       // A new sequence number (not a new version) so other devices pull the upload state; edits are not in conflict with it.
       const syncSeq = await takeSyncSeq(manager, counter);
-      row.storageKey = key;
-      row.uploadedAt = new Date();
-      await manager.update(Attachment, { id: row.id }, { storageKey: key, uploadedAt: row.uploadedAt, syncSeq });
+      // Only if nothing moved since the row was read: the offset, and the declared file the bytes were checked against.
+      const unchanged = { id: row.id, receivedBytes: start, size: row.size, sha256: row.sha256 };
+      return manager.update(Attachment, unchanged, { receivedBytes: row.size, storageKey: key, uploadedAt, syncSeq });
     });
-    await this.storage.deletePrefix(stagingPrefix(row.id));
+    // A parallel upload of the same last chunk finished first, or the declaration changed before any byte had arrived.
+    if (moved.affected !== 1) throw movedOn(row.id);
+    Object.assign(row, { receivedBytes: row.size, storageKey: key, uploadedAt });
+    if (start > 0) await this.storage.deletePrefix(stagingPrefix(row.id));
     // Committed: a scan's raw file is now on the server, so its identification can be recomputed.
     await this.recompute.enqueueRawFileOwner(row);
+    return AttachmentStatusDto.fromEntity(row);
   }
 
   /** The live attachment, when the user may see its case (inspectors: only their own); 404 otherwise. */
@@ -147,4 +159,8 @@ export class AttachmentUploadsService {
     }
     return row;
   }
+}
+
+function movedOn(id: string): ConflictException {
+  return new ConflictException(`Another upload of ${id} moved on meanwhile: ask for its status and resume from there`);
 }
