@@ -11,7 +11,7 @@ import { resolveConflict } from './resolveConflict';
 import { createSyncEngine } from './syncEngine';
 import { everythingSynced } from './syncState';
 import { createTestServer, type TestServer } from './testServer';
-import { CHUNK_BYTES, type ByteSender } from './uploadAttachments';
+import { CHUNK_BYTES, PARALLEL_UPLOADS, type ByteSender } from './uploadAttachments';
 
 let db: SitebandDb | undefined;
 let count = 0;
@@ -319,6 +319,39 @@ describe('photos and the engine', () => {
     const sent = puts;
     await engine.syncNow();
     expect(puts).toBe(sent);
+  });
+
+  it('sends a few files at once, never more than PARALLEL_UPLOADS, and every one arrives whole', async () => {
+    const d = await fresh();
+    const server = createTestServer();
+    const caseId = crypto.randomUUID();
+    await saveCase(d, caseId, caseData());
+    const owner = { caseId, ownerType: 'case' as const, ownerId: caseId };
+    const photos = new Map<string, Uint8Array>();
+    for (let k = 0; k < PARALLEL_UPLOADS * 2 + 1; k += 1) {
+      const bytes = new Uint8Array(2_000 + k).fill(k + 1);
+      photos.set(await addPhoto(d, owner, { fileName: `bay-${k}.jpg`, contentType: 'image/jpeg', bytes: bytes.buffer }), bytes);
+    }
+    const sender = senderFor(server);
+    let inFlight = 0;
+    let most = 0;
+    const counting: ByteSender = {
+      async put(path, body, headers) {
+        inFlight += 1;
+        most = Math.max(most, inFlight);
+        try {
+          return await sender.put(path, body, headers);
+        } finally {
+          inFlight -= 1;
+        }
+      },
+    };
+    const engine = createSyncEngine({ db: d, api: clientFor(server), sender: counting, clientId: 'tablet-test', schedule: () => () => undefined });
+    expect(await engine.syncNow()).toMatchObject({ failures: 0, lastError: null });
+    expect(most).toBeGreaterThan(1);
+    expect(most).toBeLessThanOrEqual(PARALLEL_UPLOADS);
+    for (const [id, bytes] of photos) expect(server.uploads.get(id)).toEqual(bytes);
+    expect(await everythingSynced(d)).toBe(true);
   });
 
   it('schedules a retry with backoff after a failed cycle', async () => {

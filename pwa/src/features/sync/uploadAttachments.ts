@@ -77,9 +77,33 @@ export async function uploadAttachment(db: SitebandDb, api: ApiClient, sender: B
   throw new Error(`The upload of ${attachment.data.fileName} made no progress`);
 }
 
-/** Uploads every attachment whose metadata the server holds and whose bytes it has neither verified nor refused. */
+/**
+ * Files in flight at once: while one waits for the server to verify and store it, the next ones travel.
+ * Few, so a slow link is not split too thin and the server is not flooded.
+ */
+export const PARALLEL_UPLOADS = 4;
+
+/**
+ * Uploads every attachment whose metadata the server holds and whose bytes it has neither verified nor
+ * refused, `PARALLEL_UPLOADS` at a time. After a failure no new file is started; the first failure is
+ * thrown once the files in flight have finished.
+ */
 export async function uploadAttachments(db: SitebandDb, api: ApiClient, sender: ByteSender): Promise<number> {
   const waiting = await db.photos.filter((p) => p.version !== null && p.uploadedAt === null && p.bytes !== undefined && p.uploadRefused === undefined).toArray();
-  for (const attachment of waiting) await uploadAttachment(db, api, sender, attachment);
+  const failures: unknown[] = [];
+  let next = 0;
+  async function worker(): Promise<void> {
+    while (next < waiting.length && failures.length === 0) {
+      const attachment = waiting[next];
+      next += 1;
+      try {
+        await uploadAttachment(db, api, sender, attachment);
+      } catch (error) {
+        failures.push(error);
+      }
+    }
+  }
+  await Promise.all(Array.from({ length: Math.min(PARALLEL_UPLOADS, waiting.length) }, worker));
+  if (failures.length > 0) throw failures[0];
   return waiting.length;
 }
