@@ -139,6 +139,31 @@ describe('Sync push and pull (e2e, MariaDB + S3 fake)', () => {
     expect((await pullAll(t, inspector, cursor)).changes).toEqual([]);
   });
 
+  it('applies a batch in order: a later change sees an earlier one, a repeated changeId is a duplicate, each write audited in order', async () => {
+    const caseId = randomUUID();
+    const sampleId = randomUUID();
+    const [before] = await t.dataSource.query('SELECT lastSeq FROM audit_chain_head');
+    const created = upsert('sample', sampleId, demo.sample(caseId));
+    const edited = upsert('sample', sampleId, demo.sample(caseId, { description: 'Second look' }), 1);
+    const stale = upsert('sample', sampleId, demo.sample(caseId, { description: 'From version 1 again' }), 1);
+    const results = await push(t, inspector, [upsert('case', caseId, demo.case()), created, edited, created, stale]);
+    expect(results.map((result) => result.status)).toEqual(['applied', 'applied', 'applied', 'duplicate', 'conflict']);
+    expect(results[2].version).toBe(2);
+    expect(results[3]).toEqual({ changeId: created.changeId, status: 'duplicate', firstStatus: 'applied', version: 1 });
+    expect(results[4].server).toMatchObject({ version: 2, data: { description: 'Second look' } });
+    const [sample] = await t.dataSource.query('SELECT version, description FROM samples WHERE id = ?', [sampleId]);
+    expect(sample).toEqual({ version: 2, description: 'Second look' });
+    expect(await count('sync_changes', 'changeId IN (?)', [[created.changeId, edited.changeId, stale.changeId]])).toBe(3);
+
+    const entries: { seq: string; entity: string; action: string }[] = await t.dataSource.query(
+      'SELECT seq, entity, action FROM audit_log WHERE seq > ? AND (entityId = ? OR entityId = ?) ORDER BY seq',
+      [before.lastSeq, caseId, sampleId],
+    );
+    expect(entries.map((entry) => `${entry.entity} ${entry.action}`)).toEqual(['case create', 'sample create', 'sample update']);
+    const admin = (await signIn(t, DEMO.admin)).accessToken;
+    expect((await t.http().get('/api/audit/verify').set('Authorization', `Bearer ${admin}`).expect(200)).body).toMatchObject({ ok: true });
+  });
+
   it('rejects only the invalid record of a batch, naming what is wrong', async () => {
     const caseId = await openCase();
     const good = upsert('note', randomUUID(), demo.note(caseId));

@@ -27,6 +27,28 @@ const VERIFY_PAGE = 500;
 
 export const AUDIT_PAGE_SIZE = 50;
 
+/**
+ * Characters of record JSON per INSERT of several entries: well below the server's packet limit
+ * (MariaDB's max_allowed_packet, 16 MiB by default; from memory), however large each record is.
+ */
+const INSERT_CHARS = 4_000_000;
+
+/** The entries in order, in groups of at most INSERT_CHARS characters of JSON (an entry over it alone). */
+function insertGroups(entries: AuditEntry[]): AuditEntry[][] {
+  const groups: AuditEntry[][] = [];
+  let chars = Infinity;
+  for (const entry of entries) {
+    const size = (entry.before?.length ?? 0) + (entry.after?.length ?? 0);
+    if (chars + size > INSERT_CHARS) {
+      groups.push([]);
+      chars = 0;
+    }
+    groups[groups.length - 1].push(entry);
+    chars += size;
+  }
+  return groups;
+}
+
 /** The append-only, hash-chained audit trail: the only writer of audit_log. */
 @Injectable()
 export class AuditService {
@@ -37,25 +59,41 @@ export class AuditService {
    * until that transaction ends, so take it after other locks (the sync counter) to keep one lock order.
    */
   async record(manager: EntityManager, input: AuditRecordInput): Promise<AuditEntry> {
+    const [entry] = await this.recordAll(manager, [input]);
+    return entry;
+  }
+
+  /**
+   * Appends entries in the given order in the caller's transaction, under one lock of the chain head:
+   * each entry names the hash of the one before it, as if they had been recorded one by one.
+   */
+  async recordAll(manager: EntityManager, inputs: readonly AuditRecordInput[]): Promise<AuditEntry[]> {
+    if (inputs.length === 0) return [];
     const head = await manager.findOne(AuditChainHead, { where: { id: AUDIT_CHAIN_HEAD_ID }, lock: { mode: 'pessimistic_write' } });
     if (!head) throw new Error('The audit_chain_head row is missing: run the migrations');
-    const entry = manager.create(AuditEntry, {
-      seq: head.lastSeq + 1,
-      at: new Date(),
-      actorId: input.actorId,
-      actorRole: input.actorRole,
-      entity: input.entity,
-      entityId: input.entityId,
-      caseId: input.caseId ?? null,
-      action: input.action,
-      before: input.before === null || input.before === undefined ? null : canonicalJson(input.before),
-      after: input.after === null || input.after === undefined ? null : canonicalJson(input.after),
-      prevHash: head.lastHash,
+    const at = new Date();
+    let last = { seq: head.lastSeq, hash: head.lastHash };
+    const entries = inputs.map((input) => {
+      const entry = manager.create(AuditEntry, {
+        seq: last.seq + 1,
+        at,
+        actorId: input.actorId,
+        actorRole: input.actorRole,
+        entity: input.entity,
+        entityId: input.entityId,
+        caseId: input.caseId ?? null,
+        action: input.action,
+        before: input.before === null || input.before === undefined ? null : canonicalJson(input.before),
+        after: input.after === null || input.after === undefined ? null : canonicalJson(input.after),
+        prevHash: last.hash,
+      });
+      entry.hash = entryHash(entry);
+      last = entry;
+      return entry;
     });
-    entry.hash = entryHash(entry);
-    await manager.insert(AuditEntry, entry);
-    await manager.update(AuditChainHead, { id: AUDIT_CHAIN_HEAD_ID }, { lastSeq: entry.seq, lastHash: entry.hash });
-    return entry;
+    for (const group of insertGroups(entries)) await manager.insert(AuditEntry, group);
+    await manager.update(AuditChainHead, { id: AUDIT_CHAIN_HEAD_ID }, { lastSeq: last.seq, lastHash: last.hash });
+    return entries;
   }
 
   /** Walks the whole chain (`walkChain`) in one read snapshot, so writers meanwhile do not disturb it. */

@@ -1,15 +1,15 @@
 import { Inject, Injectable, Optional } from '@nestjs/common';
-import { DataSource } from 'typeorm';
-import { AuditService } from '../audit/audit.service';
+import { DataSource, In, type EntityManager } from 'typeorm';
+import { AuditService, type AuditRecordInput } from '../audit/audit.service';
 import type { AuthenticatedUser } from '../auth/authenticated-user';
 import { ChangeEnvelopeDto } from './dto/change-envelope.dto';
 import type { ChangeResultDto } from './dto/change-result.dto';
 import { SyncRecordDto } from './dto/sync-record.dto';
 import { SyncChange } from './sync-change.entity';
-import type { SyncCounter } from './sync-counter.entity';
-import { ChangeRejected, SYNC_WRITE_LISTENERS, type ChangeContext, type SyncHandler, type SyncWriteListener } from './sync-handler';
+import { SYNC_COUNTER_ID, SyncCounter } from './sync-counter.entity';
+import { ChangeRejected, SYNC_WRITE_LISTENERS, type ChangeContext, type SyncEntityName, type SyncHandler, type SyncWriteListener } from './sync-handler';
 import { SyncRegistry } from './sync-registry';
-import { lockSyncCounter, takeSyncSeq } from './sync-sequence';
+import { lockSyncCounter, nextSyncSeq } from './sync-sequence';
 import type { SyncedRecord } from './synced-record';
 import { validateData } from './validate-data';
 
@@ -19,9 +19,26 @@ export interface BatchInfo {
   batchId: string;
 }
 
+/** What an applied change leaves for the end of its batch's transaction. */
+interface BatchWrites {
+  /** The sync counter, locked for the whole transaction; its new value is written once at the end. */
+  counter: SyncCounter;
+  /** The audit entries of the applied changes, in order, appended under one lock of the chain head. */
+  audit: AuditRecordInput[];
+  /** The outcome of every processed change, by changeId, inserted at the end. */
+  outcomes: Map<string, SyncChange>;
+  /** Rows read before the first change (null: not on the server), by `entity:id`, until a change of this batch writes them. */
+  prefetched: Map<string, SyncedRecord | null>;
+}
+
+/** Rows of stored outcomes per INSERT. */
+const OUTCOMES_PER_INSERT = 500;
+
 /**
- * Applies one pushed change in its own transaction, exactly once: the outcome is stored under the
- * changeId in the same transaction as the write, so a re-sent change gets the stored outcome back.
+ * Applies pushed changes exactly once: the outcome of each is stored under its changeId in the same
+ * transaction as its write, so a re-sent change gets the stored outcome back. A batch is applied in
+ * order in one transaction under one lock of the sync counter; a refused change writes nothing and
+ * the others go on.
  */
 @Injectable()
 export class ChangeApplier {
@@ -32,46 +49,107 @@ export class ChangeApplier {
     @Optional() @Inject(SYNC_WRITE_LISTENERS) private readonly listeners: SyncWriteListener[] = [],
   ) {}
 
-  /** Validates, authorises and applies one change; never throws for a bad change (only for server faults). */
+  /** Applies a single change in its own transaction (a batch of one). */
   async apply(raw: Record<string, unknown>, batch: BatchInfo, user: AuthenticatedUser): Promise<ChangeResultDto> {
-    const envelope = validateData(ChangeEnvelopeDto, raw);
-    if (!envelope.ok) {
-      // Not stored: without a valid envelope there is nothing to key it by; re-sending it fails the same way.
-      return { changeId: String(raw.changeId ?? ''), status: 'rejected', reason: `Invalid change: ${envelope.problems}` };
-    }
-    const change = envelope.value;
+    const [result] = await this.applyBatch([raw], batch, user);
+    return result;
+  }
+
+  /**
+   * Validates, authorises and applies the changes in order, all in one transaction; answers one result
+   * per change. Never throws for a bad change; a server fault rolls the whole batch back.
+   */
+  async applyBatch(raws: readonly Record<string, unknown>[], batch: BatchInfo, user: AuthenticatedUser): Promise<ChangeResultDto[]> {
+    const envelopes = raws.map((raw) => validateData(ChangeEnvelopeDto, raw));
     return this.dataSource.transaction(async (manager) => {
-      // Taken before the changeId is looked up, so two deliveries of one change cannot both apply it.
+      // Taken before any changeId is looked up, so two deliveries of one change cannot both apply it.
       const counter = await lockSyncCounter(manager);
+      const first = counter.value;
+      const valid = envelopes.flatMap((envelope) => (envelope.ok ? [envelope.value] : []));
+      const writes: BatchWrites = { counter, audit: [], outcomes: new Map(), prefetched: await this.prefetch(manager, valid) };
+      const stored = valid.length ? await manager.findBy(SyncChange, { changeId: In([...new Set(valid.map((change) => change.changeId))]) }) : [];
+      const previous = new Map(stored.map((row) => [row.changeId, row]));
 
-      const previous = await manager.findOneBy(SyncChange, { changeId: change.changeId });
-      if (previous) return duplicateOf(previous, change.changeId, user);
-
-      let result: ChangeResultDto;
-      try {
-        result = await this.decide({ manager, user }, change, counter);
-      } catch (error) {
-        if (!(error instanceof ChangeRejected)) throw error;
-        result = { changeId: change.changeId, status: 'rejected', reason: error.message };
+      const results: ChangeResultDto[] = [];
+      for (const [i, envelope] of envelopes.entries()) {
+        if (!envelope.ok) {
+          // Not stored: without a valid envelope there is nothing to key it by; re-sending it fails the same way.
+          results.push({ changeId: String(raws[i].changeId ?? ''), status: 'rejected', reason: `Invalid change: ${envelope.problems}` });
+          continue;
+        }
+        const change = envelope.value;
+        // A changeId seen before, in an earlier batch or earlier in this one.
+        const seen = previous.get(change.changeId) ?? writes.outcomes.get(change.changeId);
+        if (seen) {
+          results.push(duplicateOf(seen, change.changeId, user));
+          continue;
+        }
+        let result: ChangeResultDto;
+        try {
+          result = await this.decide({ manager, user }, change, writes);
+        } catch (error) {
+          if (!(error instanceof ChangeRejected)) throw error;
+          result = { changeId: change.changeId, status: 'rejected', reason: error.message };
+        }
+        writes.outcomes.set(
+          change.changeId,
+          manager.create(SyncChange, {
+            changeId: change.changeId,
+            userId: user.id,
+            clientId: batch.clientId,
+            batchId: batch.batchId,
+            entity: change.entity,
+            recordId: change.id,
+            status: result.status,
+            version: result.version ?? null,
+            reason: result.reason?.slice(0, 1000) ?? null,
+          }),
+        );
+        results.push(result);
       }
-      await manager.insert(SyncChange, {
-        changeId: change.changeId,
-        userId: user.id,
-        clientId: batch.clientId,
-        batchId: batch.batchId,
-        entity: change.entity,
-        recordId: change.id,
-        status: result.status,
-        version: result.version ?? null,
-        reason: result.reason?.slice(0, 1000) ?? null,
-      });
-      return result;
+
+      if (counter.value !== first) await manager.update(SyncCounter, { id: SYNC_COUNTER_ID }, { value: counter.value });
+      // After the sync counter, as every writer takes them.
+      await this.audit.recordAll(manager, writes.audit);
+      const outcomes = [...writes.outcomes.values()];
+      for (let k = 0; k < outcomes.length; k += OUTCOMES_PER_INSERT) {
+        await manager.createQueryBuilder().insert().into(SyncChange).values(outcomes.slice(k, k + OUTCOMES_PER_INSERT)).updateEntity(false).execute();
+      }
+      return results;
     });
   }
 
-  private async decide(ctx: ChangeContext, change: ChangeEnvelopeDto, counter: SyncCounter): Promise<ChangeResultDto> {
+  /** The rows the changes name, one query per kind of record. */
+  private async prefetch(manager: EntityManager, changes: ChangeEnvelopeDto[]): Promise<Map<string, SyncedRecord | null>> {
+    const found = new Map<string, SyncedRecord | null>();
+    const idsByEntity = new Map<SyncEntityName, Set<string>>();
+    for (const change of changes) idsByEntity.set(change.entity, (idsByEntity.get(change.entity) ?? new Set()).add(change.id));
+    for (const [entity, ids] of idsByEntity) {
+      let handler: SyncHandler;
+      try {
+        handler = this.registry.get(entity);
+      } catch (error) {
+        // Refused again, with its reason, when the change itself is decided.
+        if (error instanceof ChangeRejected) continue;
+        throw error;
+      }
+      // null: looked up and not on the server (a new record).
+      for (const id of ids) found.set(`${entity}:${id}`, null);
+      for (const row of await manager.findBy(handler.target, { id: In([...ids]) })) found.set(`${entity}:${row.id}`, row);
+    }
+    return found;
+  }
+
+  /** The current row of a record: as prefetched, or read again once a change of this batch has written it. */
+  private async current(ctx: ChangeContext, handler: SyncHandler, id: string, writes: BatchWrites): Promise<SyncedRecord | null> {
+    const key = `${handler.entity}:${id}`;
+    if (writes.prefetched.has(key)) return writes.prefetched.get(key) ?? null;
+    return ctx.manager.findOneBy(handler.target, { id });
+  }
+
+  private async decide(ctx: ChangeContext, change: ChangeEnvelopeDto, writes: BatchWrites): Promise<ChangeResultDto> {
     const handler = this.registry.get(change.entity);
-    const existing = await ctx.manager.findOneBy(handler.target, { id: change.id });
+    const existing = await this.current(ctx, handler, change.id, writes);
     const conflict = (row: SyncedRecord): ChangeResultDto => ({
       changeId: change.changeId,
       status: 'conflict',
@@ -88,7 +166,7 @@ export class ChangeApplier {
       if (existing.deletedAt) throw new ChangeRejected(`This ${change.entity} is already deleted`);
       const before = structuredClone(handler.toData(existing));
       existing.deletedAt = new Date();
-      return this.write(ctx, handler, existing, counter, change.changeId, { caseId, action: 'delete', before });
+      return this.write(ctx, handler, existing, writes, change.changeId, { caseId, action: 'delete', before });
     }
 
     const data = validateData(handler.dataClass, change.data);
@@ -100,32 +178,39 @@ export class ChangeApplier {
       }
       const row = ctx.manager.create(handler.target, { id: change.id, version: 0, deletedAt: null });
       await handler.assign(ctx, row, data.value, { caseId, isNew: true });
-      return this.write(ctx, handler, row, counter, change.changeId, { caseId, action: 'create', before: null });
+      return this.write(ctx, handler, row, writes, change.changeId, { caseId, action: 'create', before: null });
     }
     if (change.baseVersion !== existing.version) return conflict(existing);
     if (existing.deletedAt) throw new ChangeRejected(`This ${change.entity} was deleted on the server; it cannot be changed`);
     if (handler.appendOnly) throw new ChangeRejected(`A ${change.entity} is a permanent record: it cannot be changed once sent`);
     const before = structuredClone(handler.toData(existing));
     await handler.assign(ctx, existing, data.value, { caseId, isNew: false });
-    return this.write(ctx, handler, existing, counter, change.changeId, { caseId, action: 'update', before });
+    return this.write(ctx, handler, existing, writes, change.changeId, { caseId, action: 'update', before });
   }
 
   /**
-   * Bumps the version, takes the next sequence number, saves, records the change in the audit trail and
-   * lets the listeners of this kind of record act, all in the change's transaction.
+   * Bumps the version, takes the next sequence number, writes the row, queues its audit entry for the
+   * end of the batch and lets the listeners of this kind of record act, all in the batch's transaction.
    */
   private async write(
     ctx: ChangeContext,
     handler: SyncHandler,
     row: SyncedRecord,
-    counter: SyncCounter,
+    writes: BatchWrites,
     changeId: string,
     audit: { caseId: string; action: 'create' | 'update' | 'delete'; before: Record<string, unknown> | null },
   ): Promise<ChangeResultDto> {
     row.version += 1;
-    row.syncSeq = await takeSyncSeq(ctx.manager, counter);
-    await ctx.manager.save(handler.target, row);
-    await this.audit.record(ctx.manager, {
+    row.syncSeq = nextSyncSeq(writes.counter);
+    if (audit.action === 'create') {
+      // A plain INSERT: the row is known to be new, and nothing the answer needs is generated by the database.
+      await ctx.manager.createQueryBuilder().insert().into(handler.target).values(row).updateEntity(false).execute();
+    } else {
+      await ctx.manager.save(handler.target, row);
+    }
+    // Read again if a later change of this batch names the record.
+    writes.prefetched.delete(`${handler.entity}:${row.id}`);
+    writes.audit.push({
       actorId: ctx.user.id,
       actorRole: ctx.user.role,
       entity: handler.entity,

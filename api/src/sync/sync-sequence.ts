@@ -14,7 +14,16 @@ export async function lockSyncCounter(manager: EntityManager): Promise<SyncCount
 
 /** Hands out the next sequence number from a counter locked by `lockSyncCounter` in this transaction. */
 export async function takeSyncSeq(manager: EntityManager, counter: SyncCounter): Promise<number> {
-  counter.value += 1;
+  const seq = nextSyncSeq(counter);
   await manager.update(SyncCounter, { id: SYNC_COUNTER_ID }, { value: counter.value });
+  return seq;
+}
+
+/**
+ * The next sequence number, counted only in memory: for a writer that hands out many in one transaction
+ * and then stores the counter's `value` once, before it commits.
+ */
+export function nextSyncSeq(counter: SyncCounter): number {
+  counter.value += 1;
   return counter.value;
 }

@@ -20,16 +20,13 @@ export class SyncService {
     private readonly recompute: ScanRecomputeQueue,
   ) {}
 
-  /** Applies the changes in order, each in its own transaction; one bad change does not stop the others. */
+  /** Applies the changes in order, in one transaction; one bad change does not stop the others. */
   async push(batch: PushRequestDto, user: AuthenticatedUser): Promise<PushResponseDto> {
-    const results = [];
-    const changedScans: string[] = [];
-    for (const change of batch.changes) {
-      const result = await this.applier.apply(change, { clientId: batch.clientId, batchId: batch.batchId }, user);
-      if (result.status === 'applied' && change.entity === 'scan' && change.op === 'upsert') changedScans.push(String(change.id));
-      results.push(result);
-    }
-    // Each change has committed: the server recomputes those scans after this answer (when their raw file is in).
+    const results = await this.applier.applyBatch(batch.changes, { clientId: batch.clientId, batchId: batch.batchId }, user);
+    const changedScans = batch.changes.flatMap((change, i) =>
+      results[i].status === 'applied' && change.entity === 'scan' && change.op === 'upsert' ? [String(change.id)] : [],
+    );
+    // The batch has committed: the server recomputes those scans after this answer (when their raw file is in).
     this.recompute.enqueue(...changedScans);
     return { results };
   }
