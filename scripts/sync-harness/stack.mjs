@@ -1,7 +1,7 @@
 // A throwaway server side for the sync fault suite and the sync bench: a database of its own on the
 // private MariaDB, the S3 fake and the built API as a child process that can be killed and restarted.
 import { spawn, spawnSync } from 'node:child_process';
-import { createWriteStream, mkdirSync, rmSync } from 'node:fs';
+import { createWriteStream, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { once } from 'node:events';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -28,6 +28,17 @@ async function waitFor(check, what, timeoutMs = 60_000) {
   }
 }
 
+/** Clock ticks per second of /proc/<pid>/stat's times (`getconf CLK_TCK`, 100 on Linux; from memory). */
+const CLOCK_TICKS = 100;
+
+/** User + system CPU seconds of a process (fields 14 and 15 of /proc/<pid>/stat, see proc(5); from memory). */
+function processCpuSeconds(pid) {
+  const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
+  // The command name (field 2) is in parentheses and may hold spaces: count fields after its end.
+  const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+  return (Number(fields[11]) + Number(fields[12])) / CLOCK_TICKS;
+}
+
 /** One API process (api/dist/main.js) on `port`, that can be signalled mid-request, stopped and started again. */
 function apiProcess(port, env, name) {
   const baseUrl = `http://127.0.0.1:${port}`;
@@ -47,6 +58,8 @@ function apiProcess(port, env, name) {
     baseUrl,
     starts: () => starts,
     running: () => child !== undefined && child.exitCode === null && child.signalCode === null,
+    /** CPU seconds (user + system) the running process has used so far, from Linux's /proc/<pid>/stat. */
+    cpuSeconds: () => processCpuSeconds(child.pid),
     /** Starts the process and waits until it answers its health route. */
     async start() {
       starts += 1;
