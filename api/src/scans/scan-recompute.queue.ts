@@ -5,10 +5,17 @@ import { ScanRecomputeService } from './scan-recompute.service';
 import { Scan } from './scan.entity';
 
 /**
+ * How long the queue waits after the last push or finished upload before the next identification: a
+ * tablet's sync comes in bursts of requests, and each identification holds the process's one thread, so
+ * the burst is answered first and the scans are recomputed once it is over.
+ */
+export const RECOMPUTE_QUIET_MS = 500;
+
+/**
  * An in-process queue of scans to recompute, worked one at a time after the request that queued them
- * has been answered (a push or an upload never waits for an identification). Nothing is lost on a
- * restart: at start-up every scan whose raw file is complete and that has no recomputation yet is
- * queued again.
+ * has been answered (a push or an upload never waits for an identification), and only once no push or
+ * upload has come in for `RECOMPUTE_QUIET_MS`. Nothing is lost on a restart: at start-up every scan
+ * whose raw file is complete and that has no recomputation yet is queued again.
  */
 @Injectable()
 export class ScanRecomputeQueue implements OnApplicationBootstrap, BeforeApplicationShutdown {
@@ -17,14 +24,17 @@ export class ScanRecomputeQueue implements OnApplicationBootstrap, BeforeApplica
   private readonly waiting = new Set<string>();
   private working: Promise<void> | null = null;
   private stopped = false;
+  /** Date.now() of the last push or finished upload. */
+  private lastSync = 0;
 
   constructor(
     private readonly dataSource: DataSource,
     private readonly recompute: ScanRecomputeService,
   ) {}
 
-  /** Queues scans for recomputation and returns at once. */
+  /** Queues scans for recomputation (none: a push changed no scan) and returns at once; a sync is going on. */
   enqueue(...scanIds: string[]): void {
+    this.lastSync = Date.now();
     if (this.stopped) return;
     for (const id of scanIds) this.waiting.add(id);
     if (!this.working && this.waiting.size > 0) {
@@ -38,6 +48,8 @@ export class ScanRecomputeQueue implements OnApplicationBootstrap, BeforeApplica
    * throws: the upload is already stored, and a scan missed here is queued at the next start-up.
    */
   async enqueueRawFileOwner(attachment: Pick<Attachment, 'id' | 'kind' | 'ownerType' | 'ownerId'>): Promise<void> {
+    // Any finished upload (a photo too) is part of a sync: the next identification waits for a quiet moment.
+    this.lastSync = Date.now();
     if (attachment.kind !== 'raw-scan' || attachment.ownerType !== 'scan') return;
     try {
       const scan = await this.dataSource.getRepository(Scan).findOneBy({ id: attachment.ownerId, rawAttachmentId: attachment.id });
@@ -78,9 +90,19 @@ export class ScanRecomputeQueue implements OnApplicationBootstrap, BeforeApplica
     await this.idle();
   }
 
+  /** Resolves once no push or upload has come in for RECOMPUTE_QUIET_MS, or the queue stops. */
+  private async quiet(): Promise<void> {
+    for (let wait = this.lastSync + RECOMPUTE_QUIET_MS - Date.now(); wait > 0 && !this.stopped; wait = this.lastSync + RECOMPUTE_QUIET_MS - Date.now()) {
+      await new Promise((resolve) => setTimeout(resolve, wait));
+    }
+  }
+
   private async drain(): Promise<void> {
     try {
       for (let next = first(this.waiting); next !== undefined && !this.stopped; next = first(this.waiting)) {
+        await this.quiet();
+        // Stopped meanwhile: the waiting scans were let go for the next start-up.
+        if (this.stopped) break;
         this.waiting.delete(next);
         try {
           await this.recompute.run(next);
