@@ -1,3 +1,4 @@
+import { createSecretKey } from 'node:crypto';
 import { Module } from '@nestjs/common';
 import { APP_GUARD } from '@nestjs/core';
 import { JwtModule } from '@nestjs/jwt';
@@ -24,7 +25,8 @@ import { TokenService } from './token.service';
     JwtModule.registerAsync({
       inject: [APP_CONFIG],
       useFactory: (config: AppConfig) => ({
-        secret: config.jwt.secret,
+        // A key object made once: given the text, the token library would build one for every request it checks.
+        secret: createSecretKey(Buffer.from(config.jwt.secret, 'utf8')),
         signOptions: { algorithm: 'HS256', issuer: config.jwt.issuer, expiresIn: config.jwt.accessTtlSeconds },
         verifyOptions: { algorithms: ['HS256'], issuer: config.jwt.issuer },
       }),
