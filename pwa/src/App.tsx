@@ -8,7 +8,7 @@ import { IdleLockScreen } from './components/lock/LockScreen';
 import { ApiClientProvider } from './features/api/ApiClientContext';
 import type { ApiClient } from './features/api/client';
 import { IdleLockProvider } from './features/lock/IdleLockProvider';
-import { homePathForRole } from './features/navigation/roleTabs';
+import { entryPath } from './features/navigation/roleTabs';
 import { SessionProvider, useSession } from './features/session/SessionProvider';
 import type { SessionStore } from './features/session/sessionStore';
 // The page a signed-out visit opens first comes with the entry chunk: loading it lazily would add a
@@ -35,8 +35,7 @@ function RequireSession({ children }: { children: ReactNode }) {
 /** Sends "/" to the person's first tab, or to sign-in. */
 function HomeRedirect() {
   const { session, status } = useSession();
-  const usable = session && (status === 'online' || status === 'offline');
-  return <Navigate to={usable ? homePathForRole(session.user.role) : '/signin'} replace />;
+  return <Navigate to={entryPath(session, status)} replace />;
 }
 
 export interface AppProps {

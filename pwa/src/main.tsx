@@ -17,8 +17,10 @@ import './theme/shell.css';
 import { App } from './App';
 import { appConfig } from './config/appConfig';
 import { openDb } from './db/db';
+import { entryPath } from './features/navigation/roleTabs';
 import { createApiClient } from './features/api/client';
 import { applyThemePreference } from './features/preferences/themePreference';
+import { sessionStatus } from './features/session/offlineGrace';
 import { createSessionStore } from './features/session/sessionStore';
 import { initI18n } from './i18n';
 
@@ -29,6 +31,13 @@ async function start(): Promise<void> {
   const [db] = await Promise.all([openDb(), initI18n()]);
   const sessionStore = createSessionStore(db.session);
   await sessionStore.load();
+  // "/" is where the installed app starts. Resolving it before the first render draws the first
+  // screen once, instead of drawing the redirect and then the screen it leads to.
+  if (window.location.pathname === '/') {
+    const session = sessionStore.current();
+    const status = sessionStatus({ session, now: Date.now(), online: navigator.onLine, offlineSessionHours: appConfig.offlineSessionHours });
+    window.history.replaceState(window.history.state, '', `${entryPath(session, status)}${window.location.search}${window.location.hash}`);
+  }
   const apiClient = createApiClient({ tokens: sessionStore });
   const queryClient = new QueryClient({
     defaultOptions: { queries: { networkMode: 'online', retry: 1 } },

@@ -1,6 +1,7 @@
 import { ROLES, type Role } from '@siteband/shared';
 import { describe, expect, it } from 'vitest';
-import { homePathForRole, tabsForRole, TABS, type TabId } from './roleTabs';
+import type { StoredSession } from '../session/types';
+import { entryPath, homePathForRole, tabsForRole, TABS, type TabId } from './roleTabs';
 
 const ids = (role: Role) => tabsForRole(role).map((t) => t.id);
 
@@ -27,6 +28,14 @@ describe('role → tabs', () => {
     expect(homePathForRole('supervisor')).toBe('/tabs/review');
     expect(homePathForRole('safety_officer')).toBe('/tabs/escalations');
     expect(homePathForRole('admin')).toBe('/tabs/users');
+  });
+
+  it('starts a usable session on its first tab and everyone else on sign-in', () => {
+    const supervisor = { user: { role: 'supervisor' } } as StoredSession;
+    expect(entryPath(supervisor, 'online')).toBe('/tabs/review');
+    expect(entryPath(supervisor, 'offline')).toBe('/tabs/review');
+    expect(entryPath(supervisor, 'expired')).toBe('/signin');
+    expect(entryPath(undefined, 'signed-out')).toBe('/signin');
   });
 
   it('refuses a role it does not know', () => {

@@ -1,4 +1,6 @@
 import type { Role } from '@siteband/shared';
+import type { SessionStatus } from '../session/offlineGrace';
+import type { StoredSession } from '../session/types';
 
 /** The tabs of the signed-in shell. */
 export type TabId = 'cases' | 'capture' | 'review' | 'library' | 'escalations' | 'users' | 'audit' | 'account';
@@ -48,4 +50,13 @@ export function tabsForRole(role: Role): TabDefinition[] {
 /** Where a person of this role lands after signing in: their first tab. */
 export function homePathForRole(role: Role): string {
   return tabsForRole(role)[0].path;
+}
+
+/**
+ * Where "/" (the installed app's start) leads: the person's first tab while the session is usable
+ * (online, or offline within its period), sign-in otherwise.
+ */
+export function entryPath(session: StoredSession | undefined, status: SessionStatus): string {
+  const usable = session !== undefined && (status === 'online' || status === 'offline');
+  return usable ? homePathForRole(session.user.role) : '/signin';
 }
