@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { identifySpectrum, importSpectrum } from '@siteband/shared';
+import { identifySpectrum, importSpectrum, scanResultRecord, type ProcessOptions } from '@siteband/shared';
 import { fileKey } from '../src/attachments/attachment-storage-keys';
 import { ScanRecomputeQueue } from '../src/scans/scan-recompute.queue';
 import { ScanRecomputeService } from '../src/scans/scan-recompute.service';
@@ -14,11 +14,19 @@ const FIXTURE = 'synthetic-ir-ethanol-liquid.csv';
 const fixtureBytes = readFileSync(join(__dirname, '..', '..', 'fixtures', 'spectra', FIXTURE));
 
 /** The result a tablet stores for the fixture: the shared identification run on the device, in the sync form. */
-function tabletResult(): Record<string, unknown> {
+function tabletResult(process: Partial<ProcessOptions> = {}): Record<string, unknown> {
   const spectrum = importSpectrum(new Uint8Array(fixtureBytes), { fileName: FIXTURE, technique: 'ir' });
-  const { processed, result } = identifySpectrum(spectrum, { process: { technique: 'ir', phase: 'condensed' } });
-  const record = { ...result, quality: processed.quality, processing: processed.parameters, codeVersion: result.parameters.methodVersion };
-  return JSON.parse(JSON.stringify(record));
+  const { processed, result } = identifySpectrum(spectrum, { process: { technique: 'ir', phase: 'condensed', ...process } });
+  return scanResultRecord(result, processed);
+}
+
+/** The processing settings (not outcomes) two stored results were computed with differently. */
+function compareProcessing(a: Record<string, unknown>, b: Record<string, unknown>): string[] {
+  const left = a.processing as Record<string, Record<string, unknown>>;
+  const right = b.processing as Record<string, Record<string, unknown>>;
+  return Object.keys(left).flatMap((step) =>
+    typeof left[step] === 'object' && left[step] !== null ? Object.keys(left[step]).filter((k) => JSON.stringify(left[step][k]) !== JSON.stringify(right[step]?.[k])).map((k) => `${step}.${k}`) : [],
+  );
 }
 
 describe('Server recomputation of synced scans (e2e, MariaDB + S3 fake)', () => {
@@ -125,27 +133,95 @@ describe('Server recomputation of synced scans (e2e, MariaDB + S3 fake)', () => 
     ]);
   });
 
-  it('reports another library or method version, changed band agreements and moved peaks as such', async () => {
+  it('reports another method version, changed band agreements and moved peaks as such', async () => {
     const peaks = computed.peaks as { x: number }[];
     const candidates = computed.candidates as { id: string; score: number }[];
     const tampered = {
       ...computed,
-      libraryVersion: 'older-library',
       parameters: { ...(computed.parameters as object), methodVersion: '0.9.0' },
       candidates: [{ ...candidates[0], score: candidates[0].score - 0.01 }, ...candidates.slice(1)],
       peaks: peaks.map((p, i) => (i === 0 ? { ...p, x: p.x + 0.5 } : p)),
     };
     const scan = await scanView(await scanThenUpload(tampered));
     expect(scan.resultMismatch).toBe(true);
-    const server = computed.libraryVersion as { version: string; contentHash: string };
     expect(scan.mismatch).toMatchObject({
-      libraryVersion: { tablet: 'older-library', server: `${server.version} (${server.contentHash})` },
+      libraryVersion: null,
       methodVersion: { tablet: '0.9.0', server: (computed.parameters as { methodVersion: string }).methodVersion },
       candidates: null,
       scores: [{ id: candidates[0].id, tablet: candidates[0].score - 0.01, server: candidates[0].score }],
       peaks: { tabletCount: peaks.length, serverCount: peaks.length, moved: [{ tabletCm1: peaks[0].x + 0.5, serverCm1: peaks[0].x }] },
     });
-    expect((scan.mismatch as { differences: string[] }).differences).toHaveLength(4);
+    expect((scan.mismatch as { differences: string[] }).differences).toHaveLength(3);
+  });
+
+  it('reports a tablet ranked against another library as such, not as a mismatch of the identification', async () => {
+    const candidates = computed.candidates as Record<string, unknown>[];
+    // Another library ranks other compounds; the peaks, from the same file and settings, agree.
+    const otherLibrary = { ...computed, libraryVersion: { version: 'older-library', date: '2026-10-01', contentHash: 'sha256:0ld' }, candidates: candidates.slice(2) };
+    const scan = await scanView(await scanThenUpload(otherLibrary));
+    const server = computed.libraryVersion as { version: string; contentHash: string };
+    expect(scan.resultMismatch).toBe(false);
+    expect(scan.mismatch).toMatchObject({
+      libraryVersion: { tablet: 'older-library (sha256:0ld)', server: `${server.version} (${server.contentHash})` },
+      differences: [],
+      candidates: null,
+      peaks: null,
+    });
+    expect((scan.mismatch as { notes: string[] }).notes).toContain(
+      `Compound library differs: tablet older-library (sha256:0ld), server ${server.version} (${server.contentHash}); the likely compounds were ranked against different libraries and are not compared`,
+    );
+  });
+
+  describe('with the tablet’s tuned processing settings', () => {
+    const tunedSettings: Partial<ProcessOptions> = { baseline: { method: 'airpls', lambda: 1e5 }, smoothing: { windowSize: 15, polynomial: 2 }, peaks: { thresholdSigma: 3.5 } };
+    const tuned = tabletResult(tunedSettings);
+
+    it('recomputes with those settings and finds no mismatch', async () => {
+      // The settings change the answer: run with the defaults, this result would be flagged.
+      expect(compareProcessing(tuned, computed)).toEqual(expect.arrayContaining(['baseline.method', 'smoothing.windowSize', 'peaks.thresholdSigma']));
+      expect(tuned.peaks).not.toEqual(computed.peaks);
+      const scan = await scanView(await scanThenUpload(tuned));
+      expect(scan.serverRecomputeError).toBeNull();
+      expect(scan.resultMismatch).toBe(false);
+      expect(scan.serverResult).toEqual(tuned);
+      expect(scan.mismatch).toMatchObject({ parametersFrom: 'tablet', differences: [], processing: [], notes: [] });
+    });
+
+    it('flags a raw file other than the one the result came from', async () => {
+      const other = readFileSync(join(__dirname, '..', '..', 'fixtures', 'spectra', 'synthetic-ir-polystyrene-film.csv'));
+      const scan = await scanView(await scanThenUpload(tuned, other));
+      expect(scan.serverRecomputeError).toBeNull();
+      expect(scan.result).toEqual(tuned);
+      expect(scan.resultMismatch).toBe(true);
+      expect((scan.serverResult as { processing: { smoothing: unknown } }).processing.smoothing).toEqual({ windowSize: 15, polynomial: 2 });
+      const differences = (scan.mismatch as { differences: string[] }).differences;
+      expect(differences.some((d) => d.startsWith('Top likely compounds differ') || d.startsWith('Peak count differs') || d.includes('peak position'))).toBe(true);
+    });
+  });
+
+  it('gives a scan whose recorded processing cannot be run again a clear state, audited, without failing the push', async () => {
+    const unknownSetting = { ...computed, processing: { ...(computed.processing as object), resampling: 'spline' } };
+    const scanId = await scanThenUpload(unknownSetting);
+    const scan = await scanView(scanId);
+    expect(scan).toMatchObject({
+      serverResult: null,
+      resultMismatch: null,
+      mismatch: null,
+      serverRecomputeError: "Cannot reproduce the tablet's processing: recorded processing: unknown setting resampling",
+    });
+    // A standing answer: not tried again at start-up.
+    expect(scan.serverRecomputedAt).toEqual(expect.stringMatching(/^\d{4}-\d\d-\d\dT/));
+    expect(scan.result).toEqual(unknownSetting);
+    const admin = (await signIn(t, DEMO.admin)).accessToken;
+    const audit = await t.http().get('/api/audit').query({ entity: 'scan', entityId: scanId }).set('Authorization', `Bearer ${admin}`).expect(200);
+    expect(audit.body.items[0]).toMatchObject({ action: 'recompute', after: { resultMismatch: null, serverRecomputeError: scan.serverRecomputeError } });
+
+    const processing = JSON.parse(JSON.stringify(computed.processing));
+    processing.smoothing.windowSize = 4001;
+    const outOfBounds = await scanView(await scanThenUpload({ ...computed, processing }));
+    expect(outOfBounds.serverRecomputeError).toBe(
+      "Cannot reproduce the tablet's processing: recorded processing: smoothing.windowSize must be an odd whole number from 5 to 51, got 4001",
+    );
   });
 
   it('uses the pipeline defaults when the tablet recorded no processing settings, and says so', async () => {

@@ -3,7 +3,7 @@ import { randomUUID } from 'node:crypto';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { identifySpectrum, importSpectrum, RAMAN_LASER_CAUTION } from '@siteband/shared';
+import { identifySpectrum, importSpectrum, RAMAN_LASER_CAUTION, scanResultRecord } from '@siteband/shared';
 import { convert } from 'jcampconverter';
 import { REPORT_SECTIONS } from '../src/reports/case-report-document';
 import { ScanRecomputeQueue } from '../src/scans/scan-recompute.queue';
@@ -38,7 +38,7 @@ function asText(res: unknown, done: (error: Error | null, body: string) => void)
 function tabletResult(name: string, technique: 'ir' | 'raman', excitationNm?: number): Record<string, unknown> {
   const spectrum = importSpectrum(new Uint8Array(fixture(name)), { fileName: name, technique, ...(excitationNm ? { excitationNm } : {}) });
   const { processed, result } = identifySpectrum(spectrum, { process: { technique, phase: 'condensed' } });
-  return JSON.parse(JSON.stringify({ ...result, quality: processed.quality, processing: processed.parameters, codeVersion: result.parameters.methodVersion }));
+  return scanResultRecord(result, processed);
 }
 
 describe('Scan export and case report (e2e, MariaDB + S3 fake)', () => {

@@ -6,7 +6,7 @@ import { createHash, randomUUID } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { identifySpectrum, importSpectrum } from '@siteband/shared';
+import { identifySpectrum, importSpectrum, scanResultRecord } from '@siteband/shared';
 
 const SPECTRA = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'fixtures', 'spectra');
 
@@ -36,12 +36,12 @@ async function push(baseUrl, token, changes) {
 
 /**
  * The tablet's stored result for a fixture spectrum: the shared identification with its quality,
- * processing and code version, as the PWA stores it (features/scans/scanResultRecord.ts).
+ * processing and code version, as the PWA stores it (the shared scanResultRecord).
  */
 function storedResult(bytes, fileName, technique, excitationNm) {
   const spectrum = importSpectrum(new Uint8Array(bytes), { fileName, technique, ...(excitationNm ? { excitationNm } : {}) });
   const { processed, result } = identifySpectrum(spectrum, { process: { technique, phase: 'condensed' } });
-  return JSON.parse(JSON.stringify({ ...result, quality: processed.quality, processing: processed.parameters, codeVersion: result.parameters.methodVersion }));
+  return scanResultRecord(result, processed);
 }
 
 /**

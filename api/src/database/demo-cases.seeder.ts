@@ -3,6 +3,7 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { Readable } from 'node:stream';
 import type { INestApplicationContext } from '@nestjs/common';
+import { scanResultRecord } from '@siteband/shared';
 import { DataSource } from 'typeorm';
 import { AttachmentUploadsService } from '../attachments/attachment-uploads.service';
 import type { AuthenticatedUser } from '../auth/authenticated-user';
@@ -12,7 +13,6 @@ import { IdentifyService } from '../identify/identify.service';
 import { ReviewService } from '../review/review.service';
 import { recomputeRequest } from '../scans/recompute-request';
 import { ScanRecomputeQueue } from '../scans/scan-recompute.queue';
-import { scanResultRecord } from '../scans/scan-result-record';
 import { ChangeApplier } from '../sync/change-applier';
 import type { SyncEntityName } from '../sync/sync-handler';
 import { User } from '../users/user.entity';
@@ -156,8 +156,10 @@ async function seedCase(app: INestApplicationContext, demo: DemoCase, inspector:
 
 /** The result a tablet stores for the scan: the shared identification of the file, with the pipeline's defaults. */
 async function tabletResult(identify: IdentifyService, scan: DemoScan, bytes: Buffer): Promise<Record<string, unknown>> {
-  const { request } = recomputeRequest({ technique: scan.technique, phase: scan.phase, excitationNm: scan.excitationNm ?? null, result: null });
-  return scanResultRecord(await identify.identifyFile({ originalname: scan.file, buffer: bytes }, request));
+  // Without a recorded result there is always a run: the pipeline's defaults.
+  const { run } = recomputeRequest({ technique: scan.technique, phase: scan.phase, excitationNm: scan.excitationNm ?? null, result: null });
+  const { result, processed } = await identify.identifyFileWith({ originalname: scan.file, buffer: bytes }, run!);
+  return scanResultRecord(result, processed);
 }
 
 async function demoUser(dataSource: DataSource, role: 'inspector' | 'supervisor'): Promise<AuthenticatedUser> {

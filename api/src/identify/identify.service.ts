@@ -7,6 +7,7 @@ import {
   xyAscending,
   type IdentifyResult,
   type ProcessedScan,
+  type ProcessOptions,
   type Spectrum,
 } from '@siteband/shared';
 import { LibraryService } from '../library/library.service';
@@ -23,6 +24,19 @@ export interface UploadedScanFile {
 /** A processed scan's answer: the command line's `identify --json` object, with the uploaded file name when there is one. */
 export type IdentifyAnswer = IdentifyResult & { file?: string; quality?: ProcessedScan['quality']; processing?: ProcessedScan['parameters'] };
 
+/** An instrument file's run through the pipeline: every processing option, the laser line and the match window. */
+export interface FileRun {
+  readonly process: ProcessOptions;
+  readonly excitationNm?: number;
+  readonly toleranceCm1?: number;
+}
+
+/** The processed scan and its likely compounds, as the shared identifySpectrum returns them. */
+export interface Identification {
+  readonly processed: ProcessedScan;
+  readonly result: IdentifyResult;
+}
+
 /**
  * Likely compounds for a scan with the shared identification code, ranked against the compound
  * library in force (bundled + supervisors' edits), so the server answers exactly as a tablet does
@@ -34,14 +48,27 @@ export class IdentifyService {
 
   /** Import the instrument's file (JCAMP-DX or delimited text), process it and rank the library. */
   async identifyFile(file: UploadedScanFile, request: IdentifyRequestDto): Promise<IdentifyAnswer> {
+    const { processed, result } = await this.identifyFileWith(file, {
+      process: processOptionsOf(request),
+      ...(request.excitationNm !== undefined ? { excitationNm: request.excitationNm } : {}),
+      ...(request.toleranceCm1 !== undefined ? { toleranceCm1: request.toleranceCm1 } : {}),
+    });
+    return { file: file.originalname, ...answerOf(processed, result) };
+  }
+
+  /**
+   * Import the instrument's file and identify it with the pipeline's options given in full (the
+   * server's recomputation runs the tablet's recorded settings this way).
+   */
+  async identifyFileWith(file: UploadedScanFile, run: FileRun): Promise<Identification> {
     const spectrum = refuseBadInput(() =>
       importSpectrum(new Uint8Array(file.buffer.buffer, file.buffer.byteOffset, file.buffer.byteLength), {
         fileName: file.originalname,
-        technique: request.technique,
-        ...(request.excitationNm !== undefined ? { excitationNm: request.excitationNm } : {}),
+        technique: run.process.technique,
+        ...(run.excitationNm !== undefined ? { excitationNm: run.excitationNm } : {}),
       }),
     );
-    return { file: file.originalname, ...(await this.rankSpectrum(spectrum, request)) };
+    return this.rankSpectrum(spectrum, run.process, run.toleranceCm1);
   }
 
   /** Process a spectrum sent as JSON and rank the library. */
@@ -55,7 +82,8 @@ export class IdentifyService {
       technique: request.technique,
       ...(request.excitationNm !== undefined ? { excitationNm: request.excitationNm } : {}),
     };
-    return this.rankSpectrum(spectrum, request);
+    const { processed, result } = await this.rankSpectrum(spectrum, processOptionsOf(request), request.toleranceCm1);
+    return answerOf(processed, result);
   }
 
   /** Rank the library for a peak list already picked elsewhere. */
@@ -83,17 +111,19 @@ export class IdentifyService {
     );
   }
 
-  private async rankSpectrum(spectrum: Spectrum, request: IdentifyRequestDto): Promise<IdentifyAnswer> {
+  private async rankSpectrum(spectrum: Spectrum, process: ProcessOptions, toleranceCm1: number | undefined): Promise<Identification> {
     const { library } = await this.library.current();
-    const { processed, result } = refuseBadInput(() =>
-      identifySpectrum(spectrum, {
-        process: { technique: request.technique, phase: request.phase, ...(request.atr ? { atr: true } : {}) },
-        ...(request.toleranceCm1 !== undefined ? { toleranceCm1: request.toleranceCm1 } : {}),
-        library,
-      }),
-    );
-    return { ...result, quality: processed.quality, processing: processed.parameters };
+    return refuseBadInput(() => identifySpectrum(spectrum, { process, ...(toleranceCm1 !== undefined ? { toleranceCm1 } : {}), library }));
   }
+}
+
+/** The pipeline's options a request asks for: its technique and phase, ATR when set, the defaults otherwise. */
+function processOptionsOf(request: IdentifyRequestDto): ProcessOptions {
+  return { technique: request.technique, phase: request.phase, ...(request.atr ? { atr: true } : {}) };
+}
+
+function answerOf(processed: ProcessedScan, result: IdentifyResult): IdentifyResult & Pick<IdentifyAnswer, 'quality' | 'processing'> {
+  return { ...result, quality: processed.quality, processing: processed.parameters };
 }
 
 /**

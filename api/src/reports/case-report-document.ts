@@ -89,6 +89,13 @@ function shownCandidates(result: Record<string, unknown> | null): Record<string,
   return all.filter((candidate, index) => index < FIRST_CANDIDATES || candidate.listedForCaution === true);
 }
 
+/** The server's recomputation in one line: not run, failed or cannot reproduce (its reason), agrees, or differs. */
+function serverRecomputation(scan: FlatRecord): string {
+  if (typeof scan.serverRecomputeError === 'string' && scan.serverRecomputeError !== '') return text(scan.serverRecomputeError);
+  if (!scan.serverRecomputedAt) return 'not run';
+  return `${when(scan.serverRecomputedAt)}${scan.resultMismatch ? ': DIFFERS from the tablet, see review' : ': agrees with the tablet'}`;
+}
+
 function scanTitle(scan: FlatRecord, samples: CaseReportData['samples']): string {
   const sample = samples.find((candidate) => candidate.id === scan.sampleId);
   const laser = scan.technique === 'raman' && scan.excitationNm ? `, ${scan.excitationNm} nm` : '';
@@ -157,7 +164,7 @@ function scansSection(data: CaseReportData): Content[] {
       { text: scanTitle(scan, data.samples), style: 'h2' },
       keyValues([
         ['Instrument check', check ? `${text(check.standardId)} at ${when(check.performedAt)}: ${check.passed ? 'passed' : 'FAILED'}` : 'none linked'],
-        ['Server recomputation', scan.serverRecomputedAt ? `${when(scan.serverRecomputedAt)}${scan.resultMismatch ? ': DIFFERS from the tablet, see review' : ': agrees with the tablet'}` : text(scan.serverRecomputeError ?? 'not run')],
+        ['Server recomputation', serverRecomputation(scan)],
       ]),
       plot ? spectrumPlot(plot) : { text: plotNote ?? 'No spectrum plot.', italics: true, margin: [0, 0, 0, 6] },
       { text: 'Peaks (cm-1, tallest first up to 15, listed by position)', bold: true, margin: [0, 0, 0, 2] },

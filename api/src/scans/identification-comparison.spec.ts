@@ -73,18 +73,33 @@ describe('compareIdentifications', () => {
     expect(comparison.differences).toEqual(['Peak count differs: tablet 2, server 3']);
   });
 
-  it('names another library or ranking method version as such', () => {
+  it('names another ranking method version as a difference', () => {
     const older = copy();
-    older.libraryVersion = 'demo-1';
     older.parameters.methodVersion = '0.9.0';
     const { mismatch, comparison } = compareIdentifications(older, server, 'tablet');
     expect(mismatch).toBe(true);
-    expect(comparison.libraryVersion).toEqual({ tablet: 'demo-1', server: '1.0.0 (sha256:abc)' });
     expect(comparison.methodVersion).toEqual({ tablet: '0.9.0', server: '1.0.0' });
-    expect(comparison.differences).toEqual([
-      'Compound library differs: tablet demo-1, server 1.0.0 (sha256:abc)',
-      'Ranking method version differs: tablet 0.9.0, server 1.0.0',
+    expect(comparison.differences).toEqual(['Ranking method version differs: tablet 0.9.0, server 1.0.0']);
+  });
+
+  it('reports another library as such, not as a mismatch, and still compares the peaks', () => {
+    const older = copy();
+    older.libraryVersion = 'demo-1';
+    // Another library ranks other compounds: not a disagreement of the identification.
+    older.candidates = [{ id: 'q', score: 0.5 }];
+    const { mismatch, comparison } = compareIdentifications(older, server, 'tablet');
+    expect(mismatch).toBe(false);
+    expect(comparison.libraryVersion).toEqual({ tablet: 'demo-1', server: '1.0.0 (sha256:abc)' });
+    expect(comparison.candidates).toBeNull();
+    expect(comparison.scores).toEqual([]);
+    expect(comparison.notes).toEqual([
+      'Compound library differs: tablet demo-1, server 1.0.0 (sha256:abc); the likely compounds were ranked against different libraries and are not compared',
     ]);
+
+    older.peaks[0].x += 1;
+    const moved = compareIdentifications(older, server, 'tablet');
+    expect(moved.mismatch).toBe(true);
+    expect(moved.comparison.differences).toEqual([`1 peak position(s) differ by more than ${PEAK_POSITION_TOLERANCE_CM1} cm⁻¹`]);
   });
 
   it('notes processing settings the server ran differently without flagging an otherwise equal result', () => {
@@ -110,6 +125,7 @@ describe('compareIdentifications', () => {
     const { mismatch, comparison } = compareIdentifications({ candidates: 'many', peaks: [{ x: 'far' }, {}, null] }, server, 'defaults');
     expect(mismatch).toBe(true);
     expect(comparison.candidates?.tablet).toEqual([]);
+    expect(comparison.differences).toContain('Compound library not recorded: tablet not recorded, server 1.0.0 (sha256:abc)');
     expect(comparison.peaks?.moved).toEqual([
       { tabletCm1: null, serverCm1: 1000.5 },
       { tabletCm1: null, serverCm1: 1450.25 },

@@ -18,6 +18,7 @@ export interface ResultComparison {
   differences: string[];
   /** Remarks that are not disagreements by themselves (defaults used, settings not applied). */
   notes: string[];
+  /** Set when the two ranked against different compound libraries; then candidates and scores are not compared. */
   libraryVersion: { tablet: string | null; server: string | null } | null;
   methodVersion: { tablet: string | null; server: string | null } | null;
   candidates: { tablet: (string | null)[]; server: (string | null)[] } | null;
@@ -35,7 +36,8 @@ export interface ComparisonOutcome {
 
 /**
  * Compares the tablet's identification of a scan with the server's: library and ranking-method
- * versions, the top likely compounds in order, their band agreements and the peak list. It only
+ * versions, the top likely compounds in order, their band agreements and the peak list. Another
+ * library is reported as such (a note and `libraryVersion`), not as a disagreement. It only
  * describes; the tablet's result is never replaced.
  */
 export function compareIdentifications(
@@ -59,8 +61,10 @@ export function compareIdentifications(
     comparison.notes.push('The tablet sent no result: there is nothing to compare');
     return { mismatch: null, comparison };
   }
-  compareVersions(tablet, server, comparison);
-  compareCandidates(tablet, server, comparison);
+  const sameLibrary = compareVersions(tablet, server, comparison);
+  // Likely compounds ranked against different libraries differ for that reason alone: reported as
+  // another library, not as a mismatch of the identification. The peaks do not depend on the library.
+  if (sameLibrary) compareCandidates(tablet, server, comparison);
   comparePeaks(tablet, server, comparison);
   if (parametersFrom === 'tablet') {
     comparison.processing = jsonDifferences(tablet.processing, server.processing, MAX_PROCESSING_DIFFERENCES);
@@ -72,17 +76,24 @@ export function compareIdentifications(
   return { mismatch: comparison.differences.length > 0, comparison };
 }
 
-function compareVersions(tablet: Record<string, unknown>, server: Record<string, unknown>, out: ResultComparison): void {
+/** Compares the library and ranking-method versions; false when the two name different libraries (candidates are then not compared). */
+function compareVersions(tablet: Record<string, unknown>, server: Record<string, unknown>, out: ResultComparison): boolean {
   const library = { tablet: libraryLabel(tablet.libraryVersion), server: libraryLabel(server.libraryVersion) };
-  if (library.tablet !== library.server) {
+  const unrecorded = library.tablet === null || library.server === null;
+  if (unrecorded) {
+    // A result that does not say which library ranked it cannot be told apart from another library.
     out.libraryVersion = library;
-    out.differences.push(`Compound library differs: tablet ${library.tablet ?? 'not recorded'}, server ${library.server ?? 'not recorded'}`);
+    out.differences.push(`Compound library not recorded: tablet ${library.tablet ?? 'not recorded'}, server ${library.server ?? 'not recorded'}`);
+  } else if (library.tablet !== library.server) {
+    out.libraryVersion = library;
+    out.notes.push(`Compound library differs: tablet ${library.tablet}, server ${library.server}; the likely compounds were ranked against different libraries and are not compared`);
   }
   const method = { tablet: methodVersion(tablet), server: methodVersion(server) };
   if (method.tablet !== method.server) {
     out.methodVersion = method;
     out.differences.push(`Ranking method version differs: tablet ${method.tablet ?? 'not recorded'}, server ${method.server ?? 'not recorded'}`);
   }
+  return unrecorded || library.tablet === library.server;
 }
 
 function compareCandidates(tablet: Record<string, unknown>, server: Record<string, unknown>, out: ResultComparison): void {

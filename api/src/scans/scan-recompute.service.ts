@@ -1,5 +1,6 @@
 import { isDeepStrictEqual } from 'node:util';
 import { Injectable, Logger } from '@nestjs/common';
+import { scanResultRecord } from '@siteband/shared';
 import { DataSource } from 'typeorm';
 import { Attachment } from '../attachments/attachment.entity';
 import { AuditService } from '../audit/audit.service';
@@ -8,7 +9,6 @@ import { lockSyncCounter, takeSyncSeq } from '../sync/sync-sequence';
 import { compareIdentifications } from './identification-comparison';
 import { RawScanFiles } from './raw-scan-files';
 import { recomputeRequest } from './recompute-request';
-import { scanResultRecord } from './scan-result-record';
 import { Scan } from './scan.entity';
 
 /** The server-owned fields a recomputation writes on a scan. */
@@ -46,8 +46,9 @@ export class ScanRecomputeService {
   ) {}
 
   /**
-   * Recomputes the scan when its raw file is on the server (otherwise does nothing). A failure is
-   * stored on the scan as `serverRecomputeError`; this only throws when the database itself fails.
+   * Recomputes the scan when its raw file is on the server (otherwise does nothing). A failure, and
+   * a tablet run that cannot be reproduced, is stored on the scan as `serverRecomputeError`; this only
+   * throws when the database itself fails.
    */
   async run(scanId: string): Promise<void> {
     const scan = await this.dataSource.getRepository(Scan).findOneBy({ id: scanId });
@@ -58,13 +59,20 @@ export class ScanRecomputeService {
   }
 
   private async recompute(scan: Scan, raw: Attachment): Promise<RecomputedFields> {
+    const { run, parametersFrom, cannotReproduce } = recomputeRequest(scan);
+    if (run === null) {
+      // The tablet's settings cannot be run again: a standing answer, not retried at start-up.
+      const message = `Cannot reproduce the tablet's processing: ${cannotReproduce}`.slice(0, MAX_ERROR_CHARS);
+      this.logger.warn(`Scan ${scan.id}: ${message}`);
+      return { serverResult: null, resultMismatch: null, mismatch: null, serverRecomputedAt: new Date(), serverRecomputeError: message };
+    }
     let stage = 'read the raw file from object storage';
     try {
       // Checked again against the SHA-256 verified on upload, so a damaged stored copy is never identified.
       const bytes = await this.rawFiles.read(raw);
       stage = 'identify the raw file';
-      const { request, parametersFrom } = recomputeRequest(scan);
-      const serverResult = scanResultRecord(await this.identify.identifyFile({ originalname: raw.fileName, buffer: bytes }, request));
+      const { result, processed } = await this.identify.identifyFileWith({ originalname: raw.fileName, buffer: bytes }, run);
+      const serverResult = scanResultRecord(result, processed);
       const { mismatch, comparison } = compareIdentifications(scan.result, serverResult, parametersFrom);
       return {
         serverResult,
@@ -94,8 +102,8 @@ export class ScanRecomputeService {
       const counter = await lockSyncCounter(manager);
       const current = await manager.findOneBy(Scan, { id: read.id });
       if (!current || current.version !== read.version || current.deletedAt) return;
-      // A failure (storage briefly down) never replaces a recomputation that succeeded for the same inputs.
-      if (fields.serverRecomputeError !== null && current.serverRecomputedAt !== null) return;
+      // A passing failure (storage briefly down) never replaces a standing answer for the same inputs.
+      if (fields.serverRecomputedAt === null && current.serverRecomputedAt !== null) return;
       const same =
         isDeepStrictEqual(current.serverResult, fields.serverResult) &&
         isDeepStrictEqual(current.mismatch, fields.mismatch) &&

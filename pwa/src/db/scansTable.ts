@@ -26,6 +26,8 @@ export interface ScanServerCheck {
   serverRecomputeError: string | null;
   /** One sentence per difference, as the server wrote them. */
   differences: string[];
+  /** The two compound libraries' versions when the server ranked against another one (then the likely compounds are not compared). */
+  otherLibrary?: { tablet: string | null; server: string | null };
 }
 
 /** One row of the `scans` table. */

@@ -10,6 +10,7 @@ export { scoreCandidate, type AgainstPeak, type CandidateScore, type ExplainedPe
 export { findMixture, type MixtureFit } from './mixture.js';
 export { MAX_TOLERANCE_CM1 } from './validate-input.js';
 export { identifySpectrum, type IdentifySpectrumOptions } from './identify-spectrum.js';
+export { scanResultRecord } from './scan-result-record.js';
 export { referenceFor, spectrumCorrelation, MIN_CORRELATION_POINTS } from './correlation.js';
 export { warmUpIdentification } from './warm-up.js';
 export { phaseFit, type PhaseFit } from './phase-fit.js';

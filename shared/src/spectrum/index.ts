@@ -42,5 +42,6 @@ export {
   type ProcessParameters,
   type QualityOptions,
 } from './process-options.js';
+export { processOptionsFromRecord, ProcessingRecordError, RECORDED_PROCESSING_BOUNDS } from './recorded-processing.js';
 export { validateSpectrum } from './validate.js';
 export { SCAN_CAUTIONS, scanCautions } from './cautions.js';

@@ -1,7 +1,10 @@
 import { useTranslation } from 'react-i18next';
 import type { ScanServerCheck } from '../../db/scansTable';
 
-/** The server's recomputation of a scan: not yet, failed, agrees, or differs (with each difference). */
+/**
+ * The server's recomputation of a scan: not yet, failed (or cannot reproduce the tablet's settings),
+ * agrees, or differs (with each difference); and whether it ranked against another compound library.
+ */
 export function ServerCheckView({ check }: { check: ScanServerCheck | undefined }) {
   const { t } = useTranslation();
   let text = t('capture.scanDetail.serverPending');
@@ -11,6 +14,11 @@ export function ServerCheckView({ check }: { check: ScanServerCheck | undefined 
   return (
     <div data-testid="server-check" data-mismatch={check ? String(check.resultMismatch) : 'pending'}>
       <p>{text}</p>
+      {check?.otherLibrary && (
+        <p data-testid="server-other-library">
+          {t('capture.scanDetail.serverOtherLibrary', { tablet: check.otherLibrary.tablet ?? '—', server: check.otherLibrary.server ?? '—' })}
+        </p>
+      )}
       {check?.resultMismatch && (
         <ul>
           {check.differences.map((d) => (

@@ -1,3 +1,4 @@
+import { scanResultRecord } from '@siteband/shared';
 import type { SitebandDb } from '../../db/db';
 import type { CaseCheckData } from '../../db/caseChecksTable';
 import type { InstrumentCheckRow } from '../../db/instrumentChecksTable';
@@ -10,7 +11,6 @@ import { captureScope } from '../sync/captureTables';
 import { recordUpsert } from '../sync/recordChange';
 import { escalationData } from './escalationData';
 import { checkRawScanFile, rawScanContentType } from './rawScanFile';
-import { scanResultRecord } from './scanResultRecord';
 
 /** Everything the scan screen holds when the inspector saves an acknowledged scan. */
 export interface NewScan {
@@ -88,7 +88,7 @@ export async function saveScan(db: SitebandDb, scan: NewScan, now = Date.now()):
       instrumentCheckId,
       rawAttachmentId: attachmentId,
       rawSha256: sha256,
-      result: scanResultRecord(outcome),
+      result: scanResultRecord(outcome.result, outcome.processed),
       inspectorAcknowledgedAt: scan.acknowledgedAt,
     };
     await recordUpsert(db, { entity: 'scan', id: scanId, caseId: scan.caseId, data }, now);
