@@ -1,5 +1,6 @@
 import { randomBytes, randomUUID } from 'node:crypto';
 import { GetObjectCommand } from '@aws-sdk/client-s3';
+import { ScanRecomputeQueue } from '../src/scans/scan-recompute.queue';
 import { createS3Client } from '../src/storage/object-storage.service';
 import { demo, pullAll, push, remove, sha256, upsert, uploadWhole } from './support/field-records';
 import { startS3Fake, type S3Fake } from './support/s3-fake';
@@ -117,6 +118,8 @@ describe('Sync push and pull (e2e, MariaDB + S3 fake)', () => {
       expect(safetySees.has(id)).toBe(true);
       expect(otherSees.has(id)).toBe(false);
     }
+    // The server recomputes the scan once the sync has been quiet; its write must not land in a later test's pulls.
+    await t.app.get(ScanRecomputeQueue).idle();
   });
 
   it('answers a re-sent batch from the stored outcomes and changes nothing', async () => {

@@ -13,15 +13,17 @@ describe('ScanRecomputeQueue', () => {
     return { queue: new ScanRecomputeQueue({} as DataSource, recompute), ran };
   }
 
-  it('recomputes only once pushes and uploads have stopped for the quiet time, each queued scan once', async () => {
+  it('recomputes only once pushes, pulls and uploads have stopped for the quiet time, each queued scan once', async () => {
     const { queue: q, ran } = queue();
     q.enqueue('scan-1', 'scan-2');
     await jest.advanceTimersByTimeAsync(RECOMPUTE_QUIET_MS - 100);
     expect(ran).toEqual([]);
-    // The sync goes on: a photo upload finishes, then a push queues scan-1 again.
+    // The sync goes on: a photo upload finishes, a push queues scan-1 again, a pull reads a page.
     await q.enqueueRawFileOwner({ id: 'photo-1', kind: 'photo', ownerType: 'scan', ownerId: 'scan-1' });
     await jest.advanceTimersByTimeAsync(RECOMPUTE_QUIET_MS - 100);
     q.enqueue('scan-1');
+    await jest.advanceTimersByTimeAsync(RECOMPUTE_QUIET_MS - 100);
+    q.syncActivity();
     await jest.advanceTimersByTimeAsync(RECOMPUTE_QUIET_MS - 100);
     expect(ran).toEqual([]);
     await jest.advanceTimersByTimeAsync(200);

@@ -5,7 +5,7 @@ import { ScanRecomputeService } from './scan-recompute.service';
 import { Scan } from './scan.entity';
 
 /**
- * How long the queue waits after the last push or finished upload before the next identification: a
+ * How long the queue waits after the last push, pull or finished upload before the next identification: a
  * tablet's sync comes in bursts of requests, and each identification holds the process's one thread, so
  * the burst is answered first and the scans are recomputed once it is over.
  */
@@ -13,8 +13,8 @@ export const RECOMPUTE_QUIET_MS = 500;
 
 /**
  * An in-process queue of scans to recompute, worked one at a time after the request that queued them
- * has been answered (a push or an upload never waits for an identification), and only once no push or
- * upload has come in for `RECOMPUTE_QUIET_MS`. Nothing is lost on a restart: at start-up every scan
+ * has been answered (a push or an upload never waits for an identification), and only once no push,
+ * pull or upload has come in for `RECOMPUTE_QUIET_MS`. Nothing is lost on a restart: at start-up every scan
  * whose raw file is complete and that has no recomputation yet is queued again.
  */
 @Injectable()
@@ -24,7 +24,7 @@ export class ScanRecomputeQueue implements OnApplicationBootstrap, BeforeApplica
   private readonly waiting = new Set<string>();
   private working: Promise<void> | null = null;
   private stopped = false;
-  /** Date.now() of the last push or finished upload. */
+  /** Date.now() of the last push, pull or finished upload. */
   private lastSync = 0;
 
   constructor(
@@ -32,9 +32,14 @@ export class ScanRecomputeQueue implements OnApplicationBootstrap, BeforeApplica
     private readonly recompute: ScanRecomputeService,
   ) {}
 
+  /** A push, pull or upload came in: the next identification waits until the sync has been quiet for a while. */
+  syncActivity(): void {
+    this.lastSync = Date.now();
+  }
+
   /** Queues scans for recomputation (none: a push changed no scan) and returns at once; a sync is going on. */
   enqueue(...scanIds: string[]): void {
-    this.lastSync = Date.now();
+    this.syncActivity();
     if (this.stopped) return;
     for (const id of scanIds) this.waiting.add(id);
     if (!this.working && this.waiting.size > 0) {
@@ -48,8 +53,8 @@ export class ScanRecomputeQueue implements OnApplicationBootstrap, BeforeApplica
    * throws: the upload is already stored, and a scan missed here is queued at the next start-up.
    */
   async enqueueRawFileOwner(attachment: Pick<Attachment, 'id' | 'kind' | 'ownerType' | 'ownerId'>): Promise<void> {
-    // Any finished upload (a photo too) is part of a sync: the next identification waits for a quiet moment.
-    this.lastSync = Date.now();
+    // Any finished upload (a photo too) is part of a sync.
+    this.syncActivity();
     if (attachment.kind !== 'raw-scan' || attachment.ownerType !== 'scan') return;
     try {
       const scan = await this.dataSource.getRepository(Scan).findOneBy({ id: attachment.ownerId, rawAttachmentId: attachment.id });
@@ -90,7 +95,7 @@ export class ScanRecomputeQueue implements OnApplicationBootstrap, BeforeApplica
     await this.idle();
   }
 
-  /** Resolves once no push or upload has come in for RECOMPUTE_QUIET_MS, or the queue stops. */
+  /** Resolves once no push, pull or upload has come in for RECOMPUTE_QUIET_MS, or the queue stops. */
   private async quiet(): Promise<void> {
     for (let wait = this.lastSync + RECOMPUTE_QUIET_MS - Date.now(); wait > 0 && !this.stopped; wait = this.lastSync + RECOMPUTE_QUIET_MS - Date.now()) {
       await new Promise((resolve) => setTimeout(resolve, wait));

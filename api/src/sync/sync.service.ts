@@ -33,6 +33,8 @@ export class SyncService {
 
   /** The records visible to the user written after the cursor, oldest write first, at most `limit`. */
   async pull(query: PullQueryDto, user: AuthenticatedUser): Promise<PullResponseDto> {
+    // The tablet is syncing: its pages come before the server's recomputation of scans.
+    this.recompute.syncActivity();
     const cursor = Number(query.cursor ?? '0');
     const limit = query.limit ?? DEFAULT_PULL_LIMIT;
     // One snapshot for all tables: otherwise a write committed between two table reads could be
