@@ -103,6 +103,10 @@ describe('Review: decisions, the queue, its CSV and the case bundle (e2e)', () =
       const returned = await decide(made.caseId, { kind: 'return', comment: 'Photograph the second drum label, please', baseVersion: made.version + 2 }).expect(201);
       expect(returned.body.case.status).toBe('returned');
       let version = returned.body.case.version as number;
+      // Until the inspector submits again, the returned submission is the latest: nothing is earlier yet.
+      const whileReturned = await t.http().get(`/api/review/cases/${made.caseId}`).set(auth(tokens.supervisor)).expect(200);
+      expect(whileReturned.body.decisions.map((decision: { earlier: boolean }) => decision.earlier)).toEqual([false, false, false]);
+      expect(Object.keys(whileReturned.body.currentDecisions).sort()).toEqual([first, second].sort());
 
       // The inspector's tablet learns the decisions and the new status by pull.
       const pulled = await pullAll(t, tokens.inspector, startCursor);
@@ -121,14 +125,32 @@ describe('Review: decisions, the queue, its CSV and the case bundle (e2e)', () =
       expect(notReopen[0]).toMatchObject({ status: 'rejected', reason: expect.stringContaining('reopen it') });
       const reopened = await push(t, tokens.inspector, [upsert('case', made.caseId, demo.case({ siteName: 'Review yard', status: 'open' }), version)]);
       expect(reopened[0]).toMatchObject({ status: 'applied', version: version + 1 });
+      // The fix changes the second scan (a better result for it) before the case goes back.
       const fixed = await push(t, tokens.inspector, [
         upsert('note', randomUUID(), demo.note(made.caseId)),
+        upsert('scan', second, demo.scan(made.sampleId, { result: resultOf(CITRIC) }), 1),
         upsert('case', made.caseId, demo.case({ siteName: 'Review yard', status: 'submitted' }), version + 1),
       ]);
-      expect(fixed.map((result) => result.status)).toEqual(['applied', 'applied']);
+      expect(fixed.map((result) => result.status)).toEqual(['applied', 'applied', 'applied']);
       version += 2;
 
-      // Sign-off needs every scan decided: both are (revisions 1 and 2 stand).
+      // The supervisor decides on the resubmitted state: the decisions before the return are history.
+      const stale = await decide(made.caseId, { kind: 'sign_off', baseVersion: version }).expect(409);
+      expect(stale.body.message).toContain('as last submitted');
+      expect(stale.body.message).toContain(first);
+      expect(stale.body.message).toContain(second);
+      const resubmitted = await t.http().get(`/api/review/cases/${made.caseId}`).set(auth(tokens.supervisor)).expect(200);
+      expect(resubmitted.body.decisions.map((decision: { revision: number; earlier: boolean }) => [decision.revision, decision.earlier])).toEqual([[1, true], [2, true], [3, true]]);
+      expect(resubmitted.body.currentDecisions).toEqual({});
+
+      await decide(made.caseId, { kind: 'accept', scanId: first, baseVersion: version }).expect(201);
+      const halfway = await decide(made.caseId, { kind: 'sign_off', baseVersion: version + 1 }).expect(409);
+      expect(halfway.body.message).toContain(second);
+      expect(halfway.body.message).not.toContain(first);
+      const redecided = await decide(made.caseId, { kind: 'accept', scanId: second, baseVersion: version + 1 }).expect(201);
+      expect(redecided.body.decision).toMatchObject({ compoundId: 'citric-acid', revision: 5 });
+      version += 2;
+
       const signed = await decide(made.caseId, { kind: 'sign_off', comment: 'Presumptive identification confirmed by review', baseVersion: version }).expect(201);
       expect(signed.body.case).toEqual({ id: made.caseId, status: 'accepted', version: version + 1 });
       version += 1;
@@ -146,16 +168,19 @@ describe('Review: decisions, the queue, its CSV and the case bundle (e2e)', () =
       await decide(made.caseId, { kind: 'reopen', baseVersion: version }).expect(400);
       const reopenedBySupervisor = await decide(made.caseId, { kind: 'reopen', reason: 'The laboratory result disagrees', baseVersion: version }).expect(201);
       expect(reopenedBySupervisor.body.case.status).toBe('in_review');
-      expect(reopenedBySupervisor.body.decision).toMatchObject({ kind: 'reopen', reason: 'The laboratory result disagrees', revision: 5 });
+      expect(reopenedBySupervisor.body.decision).toMatchObject({ kind: 'reopen', reason: 'The laboratory result disagrees', revision: 7 });
 
       const labbed = await decide(made.caseId, { kind: 'needs_lab', scanId: first, comment: 'Send to the laboratory', baseVersion: version + 1 }).expect(201);
-      expect(labbed.body.decision.revision).toBe(6);
+      expect(labbed.body.decision.revision).toBe(8);
 
-      // The bundle: every decision, the current one per scan, samples with their hand-overs.
+      // The bundle: every decision (those before the return marked earlier), the current one per scan
+      // (a reopen is no new submission: the decisions since the return stand), samples with their hand-overs.
       const bundle = await t.http().get(`/api/review/cases/${made.caseId}`).set(auth(tokens.supervisor)).expect(200);
-      expect(bundle.body.decisions.map((decision: { revision: number }) => decision.revision)).toEqual([1, 2, 3, 4, 5, 6]);
-      expect(bundle.body.currentDecisions[first]).toMatchObject({ kind: 'needs_lab', revision: 6 });
-      expect(bundle.body.currentDecisions[second]).toMatchObject({ kind: 'replace', compoundId: 'gypsum', revision: 2 });
+      expect(bundle.body.decisions.map((decision: { revision: number; earlier: boolean }) => [decision.revision, decision.earlier])).toEqual([
+        [1, true], [2, true], [3, true], [4, false], [5, false], [6, false], [7, false], [8, false],
+      ]);
+      expect(bundle.body.currentDecisions[first]).toMatchObject({ kind: 'needs_lab', revision: 8 });
+      expect(bundle.body.currentDecisions[second]).toMatchObject({ kind: 'accept', compoundId: 'citric-acid', revision: 5 });
       expect(bundle.body.case).toMatchObject({ id: made.caseId, status: 'in_review', version: version + 2 });
       expect(bundle.body.samples).toEqual([expect.objectContaining({ id: made.sampleId, handovers: [] })]);
       expect(bundle.body.scans.map((scan: { id: string }) => scan.id).sort()).toEqual([...made.scanIds].sort());
@@ -167,9 +192,11 @@ describe('Review: decisions, the queue, its CSV and the case bundle (e2e)', () =
       const audit = await t.http().get('/api/audit').query({ caseId: made.caseId, pageSize: 100 }).set(auth(tokens.admin)).expect(200);
       const entries = (audit.body.items as { entity: string; action: string; actorRole: string; before: Record<string, unknown> | null; after: Record<string, unknown> | null }[]).reverse();
       const byReview = entries.filter((entry) => entry.actorRole === 'supervisor');
-      expect(byReview.filter((entry) => entry.entity === 'decision').map((entry) => entry.after?.kind)).toEqual(['accept', 'replace', 'return', 'sign_off', 'reopen', 'needs_lab']);
+      expect(byReview.filter((entry) => entry.entity === 'decision').map((entry) => entry.after?.kind)).toEqual(['accept', 'replace', 'return', 'accept', 'accept', 'sign_off', 'reopen', 'needs_lab']);
       const statusMoves = byReview.filter((entry) => entry.entity === 'case').map((entry) => `${entry.before?.status}→${entry.after?.status}`);
-      expect(statusMoves).toEqual(['submitted→in_review', 'in_review→in_review', 'in_review→returned', 'submitted→accepted', 'accepted→in_review', 'in_review→in_review']);
+      expect(statusMoves).toEqual([
+        'submitted→in_review', 'in_review→in_review', 'in_review→returned', 'submitted→in_review', 'in_review→in_review', 'in_review→accepted', 'accepted→in_review', 'in_review→in_review',
+      ]);
       expect((await t.http().get('/api/audit/verify').set(auth(tokens.admin)).expect(200)).body.ok).toBe(true);
     });
 

@@ -1,7 +1,8 @@
 // The three roles on one case, each in their own browser: the inspector records and syncs a case
 // with a hazardous scan; the safety officer is mailed and acknowledges the escalation, which the
 // inspector sees after sync; the supervisor returns the case with a comment, the inspector fixes
-// and resubmits it, the supervisor signs it off and downloads the case report. Registered in run.mjs.
+// and resubmits it, the supervisor decides on the scan afresh (the decision before the return is
+// marked earlier), signs it off and downloads the case report. Registered in run.mjs.
 // The site and people are an invented demo scenario.
 import assert from 'node:assert/strict';
 import { execFileSync } from 'node:child_process';
@@ -160,6 +161,15 @@ export function threeRoleTests({ baseUrl, password }) {
       await waitForPage(page, site);
       await page.locator('[data-testid="review-case-status"]', { hasText: 'Submitted' }).waitFor();
       await page.getByText('Seal number of TR-01: SB-009913').waitFor();
+      // The acceptance before the return is history: shown as earlier, it does not allow sign-off.
+      const scan = page.getByTestId(`review-scan-${scanId}`);
+      await scan.getByTestId('decision-earlier').waitFor();
+      assert.match(await page.getByTestId('decision-history').textContent(), /Earlier submission/);
+      assert.equal(await page.getByRole('button', { name: 'Sign off the case' }).isDisabled(), true, 'no sign-off on decisions of an earlier submission');
+      await assertAccessible(page, 'the resubmitted case with an earlier decision');
+      await scan.getByLabel('Accept Ammonium nitrate').check();
+      await scan.getByRole('button', { name: 'Record the decision' }).click();
+      await scan.locator('[data-testid="decision-line"]:not([data-earlier])').filter({ hasText: 'Accepted Ammonium nitrate' }).waitFor();
       await page.getByTestId('sign-off').click();
       await page.locator('[data-testid="review-case-status"]', { hasText: 'Accepted' }).waitFor();
       assert.match(await page.getByTestId('decision-history').textContent(), /Signed off/);

@@ -2,7 +2,7 @@ import { GENERAL_CAUTIONS, RAMAN_LASER_CAUTION, scanCautions } from '@siteband/s
 import type { Content, TDocumentDefinitions } from 'pdfmake/interfaces';
 import type { AuditVerifyDto } from '../audit/dto/audit.dto';
 import type { FlatRecord } from '../cases/dto/case-list.dto';
-import type { DecisionDto } from '../review/dto/decision.dto';
+import type { BundleDecisionDto, DecisionDto } from '../review/dto/decision.dto';
 import { asArray, asNumber, asObject } from '../scans/json-reading';
 import { spectrumPlot, type PlotInput } from './spectrum-plot';
 
@@ -18,7 +18,7 @@ export interface CaseReportData {
   /** Each scan with its plot from the raw file, or why there is none. */
   scans: { record: FlatRecord; plot: PlotInput | null; plotNote: string | null }[];
   escalations: FlatRecord[];
-  decisions: DecisionDto[];
+  decisions: BundleDecisionDto[];
   currentDecisions: Record<string, DecisionDto>;
   audit: { entries: number; firstAt: string | null; lastAt: string | null; chain: AuditVerifyDto };
 }
@@ -256,7 +256,7 @@ function reviewSection(data: CaseReportData): Content[] {
     { text: 'Every decision', style: 'h2' },
     grid(
       ['#', 'Decision', 'On', 'Compound', 'Reason or comment', 'By', 'At'],
-      data.decisions.map((d) => [String(d.revision), DECISION_LABELS[d.kind] ?? d.kind, scanName(d.scanId), text(d.compoundName), [d.reason, d.comment].filter(Boolean).join(' / ') || '-', d.decidedByName, when(d.decidedAt)]),
+      data.decisions.map((d) => [String(d.revision), `${DECISION_LABELS[d.kind] ?? d.kind}${d.earlier ? ' (earlier submission)' : ''}`, scanName(d.scanId), text(d.compoundName), [d.reason, d.comment].filter(Boolean).join(' / ') || '-', d.decidedByName, when(d.decidedAt)]),
       [18, 70, 60, 60, '*', 60, 60],
     ),
   ];

@@ -15,6 +15,7 @@ import { lockSyncCounter, takeSyncSeq } from '../sync/sync-sequence';
 import type { DecisionRequestDto } from './dto/decision-request.dto';
 import type { DecisionDto, DecisionResultDto } from './dto/decision.dto';
 import type { CaseBundleDto } from './dto/case-bundle.dto';
+import { decisionsInForce } from './decisions-in-force';
 import { isScanDecision, ReviewDecision, type DecisionKind } from './review-decision.entity';
 import { decisionPull } from './review-decision.pull';
 
@@ -73,7 +74,7 @@ export class ReviewService {
           compound = { id: scan.likelyCompoundId, name: scan.likelyCompoundName ?? scan.likelyCompoundId };
         }
       }
-      if (body.kind === 'sign_off') await assertEveryScanDecided(manager, caseId);
+      if (body.kind === 'sign_off') await assertEveryScanDecided(manager, row);
 
       const last = await manager
         .createQueryBuilder(ReviewDecision, 'd')
@@ -116,9 +117,11 @@ export class ReviewService {
   /** The case with samples (and their hand-overs), scans, notes, attachments, escalations (and their notes) and every decision. */
   async bundle(caseId: string, user: AuthenticatedUser): Promise<CaseBundleDto> {
     const detail = await this.cases.detail(caseId, user);
-    const decisions = (await this.dataSource.getRepository(ReviewDecision).find({ where: { caseId }, order: { revision: 'ASC' } })).map(decisionDto);
+    const rows = await this.dataSource.getRepository(ReviewDecision).find({ where: { caseId }, order: { revision: 'ASC' } });
+    const inForce = decisionsInForce(rows, detail.case.status as CaseStatus);
+    const decisions = rows.map((row) => ({ ...decisionDto(row), earlier: inForce.isEarlier(row) }));
     const current: Record<string, DecisionDto> = {};
-    for (const decision of decisions) if (decision.scanId) current[decision.scanId] = decision;
+    for (const [scanId, row] of inForce.current) current[scanId] = decisionDto(row);
     const notes = await this.dataSource.getRepository(EscalationNote).find({ where: { caseId }, order: { at: 'ASC', id: 'ASC' } });
     const { handovers, ...rest } = detail;
     return {
@@ -151,17 +154,14 @@ function refuseFieldsNotFor(body: DecisionRequestDto): void {
   if (refused.length > 0) throw new BadRequestException(`A ${body.kind} decision does not take ${refused.join(', ')}`);
 }
 
-/** Sign-off needs a current decision on every live scan of the case. */
-async function assertEveryScanDecided(manager: EntityManager, caseId: string): Promise<void> {
-  const undecided = await manager
-    .createQueryBuilder(Scan, 's')
-    .select('s.id', 'id')
-    .where('s.caseId = :caseId AND s.deletedAt IS NULL', { caseId })
-    .andWhere('NOT EXISTS (SELECT 1 FROM review_decisions d WHERE d.scanId = s.id)')
-    .orderBy('s.recordedAt', 'ASC')
-    .getRawMany<{ id: string }>();
+/** Sign-off needs a decision on every live scan of the case, made on its latest submission. */
+async function assertEveryScanDecided(manager: EntityManager, row: Case): Promise<void> {
+  const decisions = await manager.find(ReviewDecision, { where: { caseId: row.id }, select: { id: true, scanId: true, kind: true, revision: true } });
+  const { current } = decisionsInForce(decisions, row.status);
+  const scans = await manager.find(Scan, { where: { caseId: row.id, deletedAt: IsNull() }, select: { id: true }, order: { recordedAt: 'ASC', id: 'ASC' } });
+  const undecided = scans.filter((scan) => !current.has(scan.id));
   if (undecided.length > 0) {
-    throw new ConflictException(`Every scan needs a decision before sign-off; still undecided: ${undecided.map((scan) => scan.id).join(', ')}`);
+    throw new ConflictException(`Every scan needs a decision on the case as last submitted before sign-off; still undecided: ${undecided.map((scan) => scan.id).join(', ')}`);
   }
 }
 

@@ -15,7 +15,7 @@ import '../components/review/review.css';
 import { useApiClient } from '../features/api/ApiClientContext';
 import { useLibrary } from '../features/library/useLibrary';
 import { useOnlineStatus } from '../features/network/onlineStatus';
-import { caseActions, childrenOf, currentDecisionOf, decisionHistory, handoversOf } from '../features/review/caseReview';
+import { caseActions, childrenOf, currentDecisionOf, decisionHistory, earlierDecisionOf, handoversOf } from '../features/review/caseReview';
 import { downloadCaseReport, downloadScanJcamp } from '../features/review/reviewApi';
 import { reviewPaths } from '../features/review/reviewPaths';
 import { saveFile } from '../features/review/saveFile';
@@ -252,6 +252,7 @@ export default function CaseReviewPage() {
                   key={scan.id}
                   scan={scan}
                   current={currentDecisionOf(data, scan.id)}
+                  earlier={earlierDecisionOf(data, scan.id)}
                   canDecide={actions.decideScans}
                   compounds={compounds}
                   library={library?.source === 'bundled' ? undefined : library?.library}

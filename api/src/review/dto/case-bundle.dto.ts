@@ -1,6 +1,6 @@
 import { ApiProperty } from '@nestjs/swagger';
 import type { FlatRecord } from '../../cases/dto/case-list.dto';
-import { DecisionDto } from './decision.dto';
+import { BundleDecisionDto, DecisionDto } from './decision.dto';
 
 /** Everything of a case for its review page. */
 export class CaseBundleDto {
@@ -25,9 +25,12 @@ export class CaseBundleDto {
   @ApiProperty({ type: Object, isArray: true, description: 'Attachment metadata (bytes through /api/attachments/:id/content)' })
   attachments: FlatRecord[];
 
-  @ApiProperty({ type: DecisionDto, isArray: true, description: 'Every decision, oldest revision first' })
-  decisions: DecisionDto[];
+  @ApiProperty({ type: BundleDecisionDto, isArray: true, description: 'Every decision, oldest revision first, each marked whether it was made on an earlier submission' })
+  decisions: BundleDecisionDto[];
 
-  @ApiProperty({ type: Object, description: 'The current decision of each decided scan, by scan id (its highest revision)' })
+  @ApiProperty({
+    type: Object,
+    description: 'The current decision of each scan decided on the latest submission, by scan id (its highest revision since then); decisions on an earlier submission do not count towards sign-off',
+  })
   currentDecisions: Record<string, DecisionDto>;
 }

@@ -41,6 +41,12 @@ export class DecisionDto {
   decidedAt: string;
 }
 
+/** A decision in a case's bundle: whether it was made on an earlier submission (before a return the inspector has answered by submitting again). */
+export class BundleDecisionDto extends DecisionDto {
+  @ApiProperty({ description: 'Made on an earlier submission: history, shown, but it does not count towards sign-off' })
+  earlier: boolean;
+}
+
 /** The case after a decision: its status and the version to decide on next. */
 export class DecidedCaseDto {
   @ApiProperty({ format: 'uuid' })

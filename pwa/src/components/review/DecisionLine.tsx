@@ -1,12 +1,18 @@
 import { useTranslation } from 'react-i18next';
-import type { Decision } from '../../features/review/types';
+import type { BundleDecision, Decision } from '../../features/review/types';
 import { formatDateTime } from '../../i18n/format';
 
-/** One decision in words: what, by whom, when, with its reason or comment. */
-export function DecisionLine({ decision }: { decision: Decision }) {
+/** One decision in words: what, by whom, when, with its reason or comment; one made on an earlier submission says so. */
+export function DecisionLine({ decision }: { decision: Decision | BundleDecision }) {
   const { t, i18n } = useTranslation();
+  const earlier = 'earlier' in decision && decision.earlier;
   return (
-    <div className="sb-decision" data-testid="decision-line" data-kind={decision.kind}>
+    <div className={earlier ? 'sb-decision sb-decision--earlier' : 'sb-decision'} data-testid="decision-line" data-kind={decision.kind} data-earlier={earlier ? 'true' : undefined}>
+      {earlier && (
+        <p className="sb-decision__earlier" data-testid="decision-earlier">
+          {t('review.decision.earlier')}
+        </p>
+      )}
       <p>
         <strong>{t(`review.decision.kind.${decision.kind}`, { compound: decision.compoundName ?? decision.compoundId ?? '' })}</strong>
       </p>

@@ -10,7 +10,7 @@ import { identifyClient } from '../../features/identify/identifyWorker';
 import { cautionsFor } from '../../features/identify/resultView';
 import { formatAgreement } from '../../features/identify/format';
 import { rawScanInputOf, storedIdentifyResult } from '../../features/review/caseReview';
-import type { Decision, DecisionInput, FlatRecord } from '../../features/review/types';
+import type { BundleDecision, Decision, DecisionInput, FlatRecord } from '../../features/review/types';
 import { useRawScanOutcome } from '../../features/review/useReview';
 import { serverCheckOf } from '../../features/scans/serverCheck';
 import { formatDateTime } from '../../i18n/format';
@@ -20,6 +20,8 @@ import { ScanDecisionForm } from './ScanDecisionForm';
 export interface ReviewScanProps {
   scan: FlatRecord;
   current: Decision | null;
+  /** Without a current decision: the last one on an earlier submission, shown as history. */
+  earlier: BundleDecision | null;
   canDecide: boolean;
   compounds: readonly Compound[];
   library: Library | undefined;
@@ -32,9 +34,9 @@ export interface ReviewScanProps {
 /**
  * One scan under review: how it was taken, its spectrum read again from the raw file on the
  * server, the likely compounds the tablet found with their evidence, the server's recomputation,
- * the current decision and the form to decide.
+ * the current decision (or the last one on an earlier submission) and the form to decide.
  */
-export function ReviewScan({ scan, current, canDecide, compounds, library, baseVersion, busy, onDecide, onJcamp }: ReviewScanProps) {
+export function ReviewScan({ scan, current, earlier, canDecide, compounds, library, baseVersion, busy, onDecide, onJcamp }: ReviewScanProps) {
   const { t, i18n } = useTranslation();
   const headingId = useId();
   const stored = storedIdentifyResult(scan.result);
@@ -80,7 +82,8 @@ export function ReviewScan({ scan, current, canDecide, compounds, library, baseV
       </div>
 
       <h4>{t('review.scan.decisionHeading')}</h4>
-      {current ? <DecisionLine decision={current} /> : <p className="sb-muted">{t('review.scan.noDecision')}</p>}
+      {current ? <DecisionLine decision={current} /> : <p className="sb-muted">{t(earlier ? 'review.scan.noFreshDecision' : 'review.scan.noDecision')}</p>}
+      {earlier && <DecisionLine decision={earlier} />}
       {canDecide && <ScanDecisionForm key={current?.revision ?? 0} scanId={scan.id} firstCompound={first} compounds={compounds} baseVersion={baseVersion} busy={busy} onDecide={onDecide} />}
     </section>
   );

@@ -1,15 +1,16 @@
 import { describe, expect, it } from 'vitest';
-import { caseActions, currentDecisionOf, decisionHistory, handoversOf, rawScanInputOf, storedIdentifyResult } from './caseReview';
-import type { CaseBundle, Decision } from './types';
+import { caseActions, currentDecisionOf, decisionHistory, earlierDecisionOf, handoversOf, rawScanInputOf, storedIdentifyResult } from './caseReview';
+import type { BundleDecision, CaseBundle } from './types';
 
-function decision(revision: number, scanId: string | null, kind: Decision['kind']): Decision {
+function decision(revision: number, scanId: string | null, kind: BundleDecision['kind'], earlier = false): BundleDecision {
   return {
+    earlier,
     id: `d-${revision}`, caseId: 'c-1', scanId, kind, compoundId: null, compoundName: null, reason: null, comment: null, revision,
     decidedBy: 'u-s', decidedByName: 'Supervisor', decidedAt: `2026-11-0${revision}T10:00:00.000Z`,
   };
 }
 
-function bundle(status: CaseBundle['case']['status'], decisions: Decision[], current: Decision[]): CaseBundle {
+function bundle(status: CaseBundle['case']['status'], decisions: BundleDecision[], current: BundleDecision[]): CaseBundle {
   return {
     case: { id: 'c-1', version: 4, siteName: 'Dock 4', status, startedAt: '2026-11-01T08:00:00.000Z' },
     samples: [
@@ -49,6 +50,16 @@ describe('case review', () => {
     for (const status of ['returned', 'open'] as const) {
       expect(caseActions(bundle(status, [], []))).toMatchObject({ decideScans: false, returnCase: false, signOff: false, reopen: false });
     }
+  });
+
+  it('keeps a scan decided only on an earlier submission undecided, and shows that earlier decision', () => {
+    const before = decision(1, 'scan-1', 'accept', true);
+    const returned = decision(2, null, 'return', true);
+    const fresh = decision(3, 'scan-2', 'needs_lab');
+    const b = bundle('in_review', [before, returned, fresh], [fresh]);
+    expect(caseActions(b)).toMatchObject({ signOff: false, undecidedScanIds: ['scan-1'] });
+    expect(earlierDecisionOf(b, 'scan-1')).toBe(before);
+    expect(earlierDecisionOf(b, 'scan-2')).toBeNull();
   });
 
   it("reads the server's current decision per scan", () => {

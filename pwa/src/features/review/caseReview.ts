@@ -2,7 +2,7 @@
 import type { IdentifyResult } from '@siteband/shared';
 import type { CaseStatus } from '../../db/casesTable';
 import type { RawScanInput } from './useReview';
-import type { CaseBundle, Decision, FlatRecord } from './types';
+import type { BundleDecision, CaseBundle, Decision, FlatRecord } from './types';
 
 /**
  * The tablet's stored result as the shared identification result, when it has the shape the result
@@ -36,9 +36,15 @@ export function rawScanInputOf(scan: FlatRecord): RawScanInput | null {
   };
 }
 
-/** The current decision on a scan as the server says it (the highest revision for it), if any. */
+/** The current decision on a scan as the server says it (its highest revision on the latest submission), if any. */
 export function currentDecisionOf(bundle: CaseBundle, scanId: string): Decision | null {
   return bundle.currentDecisions[scanId] ?? null;
+}
+
+/** The last decision on a scan made on an earlier submission, shown while the scan awaits a fresh one; null otherwise. */
+export function earlierDecisionOf(bundle: CaseBundle, scanId: string): BundleDecision | null {
+  if (currentDecisionOf(bundle, scanId)) return null;
+  return decisionHistory(bundle).find((d) => d.scanId === scanId && d.earlier) ?? null;
 }
 
 /** What the supervisor may do now; the server checks the same rules and answers 409/400 otherwise. */
@@ -73,7 +79,7 @@ export function childrenOf(records: readonly FlatRecord[], field: string, parent
 }
 
 /** Every decision, newest revision first (the decision history). */
-export function decisionHistory(bundle: CaseBundle): Decision[] {
+export function decisionHistory(bundle: CaseBundle): BundleDecision[] {
   return [...bundle.decisions].sort((a, b) => b.revision - a.revision);
 }
 

@@ -63,6 +63,12 @@ export interface Decision {
   decidedAt: string;
 }
 
+/** A decision in a case's bundle, marked by the server when it was made on an earlier submission. */
+export interface BundleDecision extends Decision {
+  /** Made before a return the inspector has answered by submitting again: history, it does not count towards sign-off. */
+  earlier: boolean;
+}
+
 /** The answer to a decision: the decision and the case's new status and version. */
 export interface DecisionResult {
   decision: Decision;
@@ -81,7 +87,7 @@ export interface CaseBundle {
   notes: FlatRecord[];
   attachments: FlatRecord[];
   escalations: FlatRecord[];
-  decisions: Decision[];
-  /** The current decision (highest revision) of each decided scan, by scan id. */
+  decisions: BundleDecision[];
+  /** The current decision of each scan decided on the latest submission (its highest revision since then), by scan id. */
   currentDecisions: Record<string, Decision>;
 }
