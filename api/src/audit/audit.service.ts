@@ -1,12 +1,12 @@
 import { Injectable } from '@nestjs/common';
 import type { Role } from '@siteband/shared';
 import { DataSource, type EntityManager } from 'typeorm';
+import { pageOf } from '../common/page-query';
 import { AUDIT_CHAIN_HEAD_ID, AuditChainHead } from './audit-chain-head.entity';
 import { walkChain } from './audit-chain';
 import { AuditEntry } from './audit-entry.entity';
 import { canonicalJson, entryHash } from './audit-hash';
-import type { AuditListDto, AuditListQueryDto, AuditVerifyDto } from './dto/audit.dto';
-import { AuditEntryDto } from './dto/audit.dto';
+import { AUDIT_PAGE, AuditEntryDto, type AuditListDto, type AuditListQueryDto, type AuditVerifyDto } from './dto/audit.dto';
 
 /** What a caller records: who changed which record how, with the record before and after. */
 export interface AuditRecordInput {
@@ -24,8 +24,6 @@ export interface AuditRecordInput {
 
 /** Entries read per query while verifying. */
 const VERIFY_PAGE = 500;
-
-export const AUDIT_PAGE_SIZE = 50;
 
 /**
  * Characters of record JSON per INSERT of several entries: well below the server's packet limit
@@ -114,15 +112,14 @@ export class AuditService {
 
   /** One page of entries, newest first, filtered by record or case. */
   async list(query: AuditListQueryDto): Promise<AuditListDto> {
-    const page = query.page ?? 1;
-    const pageSize = query.pageSize ?? AUDIT_PAGE_SIZE;
+    const { page, pageSize, offset } = pageOf(query, AUDIT_PAGE);
     const builder = this.dataSource.getRepository(AuditEntry).createQueryBuilder('entry');
     if (query.entity !== undefined) builder.andWhere('entry.entity = :entity', { entity: query.entity });
     if (query.entityId !== undefined) builder.andWhere('entry.entityId = :entityId', { entityId: query.entityId });
     if (query.caseId !== undefined) builder.andWhere('entry.caseId = :caseId', { caseId: query.caseId });
     const [rows, total] = await builder
       .orderBy('entry.seq', 'DESC')
-      .skip((page - 1) * pageSize)
+      .skip(offset)
       .take(pageSize)
       .getManyAndCount();
     return { items: rows.map((row) => AuditEntryDto.of(row)), total, page, pageSize };

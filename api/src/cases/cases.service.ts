@@ -13,7 +13,8 @@ import type { SyncedRecord } from '../sync/synced-record';
 import { canSeeCase, whereCaseVisible } from './case-access';
 import { Case } from './case.entity';
 import { caseSyncHandler } from './case.sync-handler';
-import type { CaseDetailDto, CaseListDto, CaseListQueryDto, FlatRecord } from './dto/case-list.dto';
+import { CASES_PAGE, type CaseDetailDto, type CaseListDto, type CaseListQueryDto, type FlatRecord } from './dto/case-list.dto';
+import { pageOf } from '../common/page-query';
 
 /** Reads of cases for the web views (all writes go through sync). */
 @Injectable()
@@ -22,15 +23,14 @@ export class CasesService {
 
   /** One page of the live cases the user may see, by visit start, newest first. */
   async list(query: CaseListQueryDto, user: AuthenticatedUser): Promise<CaseListDto> {
-    const page = query.page ?? 1;
-    const pageSize = query.pageSize ?? 20;
+    const { page, pageSize, offset } = pageOf(query, CASES_PAGE);
     const builder = this.dataSource
       .getRepository(Case)
       .createQueryBuilder('r')
       .where('r.deletedAt IS NULL')
       .orderBy('r.startedAt', 'DESC')
       .addOrderBy('r.id', 'ASC')
-      .skip((page - 1) * pageSize)
+      .skip(offset)
       .take(pageSize);
     const [rows, total] = await whereCaseVisible(builder, 'r.id', user).getManyAndCount();
     return { items: rows.map((row) => flat(caseSyncHandler, row)), page, pageSize, total };

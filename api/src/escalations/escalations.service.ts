@@ -10,15 +10,17 @@ import { escalationSyncHandler } from '../scans/escalation.sync-handler';
 import { Scan } from '../scans/scan.entity';
 import { lockSyncCounter, takeSyncSeq } from '../sync/sync-sequence';
 import { User } from '../users/user.entity';
-import type {
-  AcknowledgeEscalationDto,
-  AddEscalationNoteDto,
-  CloseEscalationDto,
-  EscalationDetailDto,
-  EscalationDto,
-  EscalationListDto,
-  EscalationListQueryDto,
-  EscalationNoteDto,
+import { pageOf } from '../common/page-query';
+import {
+  ESCALATIONS_PAGE,
+  type AcknowledgeEscalationDto,
+  type AddEscalationNoteDto,
+  type CloseEscalationDto,
+  type EscalationDetailDto,
+  type EscalationDto,
+  type EscalationListDto,
+  type EscalationListQueryDto,
+  type EscalationNoteDto,
 } from './dto/escalation.dto';
 import { likelyCompoundNames } from './escalation-mail';
 import { EscalationNote } from './escalation-note.entity';
@@ -37,8 +39,7 @@ export class EscalationsService {
 
   /** Raised first, then acknowledged, then closed; newest arrival first within each. */
   async list(query: EscalationListQueryDto, user: AuthenticatedUser): Promise<EscalationListDto> {
-    const page = query.page ?? 1;
-    const pageSize = query.pageSize ?? 25;
+    const { page, pageSize, offset } = pageOf(query, ESCALATIONS_PAGE);
     const builder = this.dataSource
       .getRepository(Escalation)
       .createQueryBuilder('e')
@@ -46,7 +47,7 @@ export class EscalationsService {
       .orderBy("FIELD(e.status, 'raised', 'acknowledged', 'closed')", 'ASC')
       .addOrderBy('e.createdAt', 'DESC')
       .addOrderBy('e.id', 'ASC')
-      .skip((page - 1) * pageSize)
+      .skip(offset)
       .take(pageSize);
     if (query.status?.length) builder.andWhere('e.status IN (:...statuses)', { statuses: query.status });
     const [rows, total] = await whereCaseVisible(builder, 'e.caseId', user).getManyAndCount();

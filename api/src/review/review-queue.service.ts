@@ -3,7 +3,8 @@ import { hazardRankOf, toCsv } from '@siteband/shared';
 import { DataSource, type SelectQueryBuilder } from 'typeorm';
 import { Case } from '../cases/case.entity';
 import { User } from '../users/user.entity';
-import { DEFAULT_QUEUE_PAGE_SIZE, DEFAULT_QUEUE_STATUSES, type QueueItemDto, type QueuePageDto, type QueueQueryDto, type QueueSort } from './dto/queue.dto';
+import { pageOf } from '../common/page-query';
+import { DEFAULT_QUEUE_STATUSES, QUEUE_PAGE, type QueueItemDto, type QueuePageDto, type QueueQueryDto, type QueueSort } from './dto/queue.dto';
 
 /** At most this many likely compounds are listed per queue row. */
 const MAX_LISTED_COMPOUNDS = 5;
@@ -49,11 +50,10 @@ export class ReviewQueueService {
 
   /** One page of the queue. */
   async page(query: QueueQueryDto): Promise<QueuePageDto> {
-    const page = query.page ?? 1;
-    const pageSize = query.pageSize ?? DEFAULT_QUEUE_PAGE_SIZE;
+    const { page, pageSize, offset } = pageOf(query, QUEUE_PAGE);
     const total = await this.filtered(query).getCount();
     const rows = await this.sorted(query)
-      .offset((page - 1) * pageSize)
+      .offset(offset)
       .limit(pageSize)
       .getRawMany<QueueRow>();
     return { items: await this.items(rows), total, page, pageSize };

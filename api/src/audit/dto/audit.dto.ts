@@ -1,12 +1,13 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { Type } from 'class-transformer';
-import { IsInt, IsOptional, IsString, IsUUID, Length, Max, Min } from 'class-validator';
+import { IsOptional, IsString, IsUUID, Length } from 'class-validator';
 import type { AuditEntry } from '../audit-entry.entity';
+import { PageQuery, type PageLimits } from '../../common/page-query';
 
-export const MAX_AUDIT_PAGE_SIZE = 200;
+/** `GET /api/audit` pages: 50 entries unless asked, at most 200. */
+export const AUDIT_PAGE: PageLimits = { defaultPageSize: 50, maxPageSize: 200 };
 
 /** `GET /api/audit` query. */
-export class AuditListQueryDto {
+export class AuditListQueryDto extends PageQuery(AUDIT_PAGE) {
   @ApiPropertyOptional({ description: 'Kind of record: case, sample, handover, scan, note, instrumentCheck, escalation, attachment, decision, user…' })
   @IsOptional()
   @IsString()
@@ -23,21 +24,6 @@ export class AuditListQueryDto {
   @IsOptional()
   @IsUUID()
   caseId?: string;
-
-  @ApiPropertyOptional({ minimum: 1, default: 1 })
-  @IsOptional()
-  @Type(() => Number)
-  @IsInt()
-  @Min(1)
-  page?: number;
-
-  @ApiPropertyOptional({ minimum: 1, maximum: MAX_AUDIT_PAGE_SIZE, default: 50 })
-  @IsOptional()
-  @Type(() => Number)
-  @IsInt()
-  @Min(1)
-  @Max(MAX_AUDIT_PAGE_SIZE)
-  pageSize?: number;
 }
 
 /** One audit entry as the admin sees it. */

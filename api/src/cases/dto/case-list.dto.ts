@@ -1,26 +1,11 @@
-import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { Type } from 'class-transformer';
-import { IsInt, IsOptional, Max, Min } from 'class-validator';
+import { ApiProperty } from '@nestjs/swagger';
+import { PageQuery, type PageLimits } from '../../common/page-query';
 
-export const MAX_CASES_PAGE_SIZE = 100;
+/** `GET /api/cases` pages: 20 cases unless asked, at most 100. */
+export const CASES_PAGE: PageLimits = { defaultPageSize: 20, maxPageSize: 100 };
 
 /** `GET /api/cases` query. */
-export class CaseListQueryDto {
-  @ApiPropertyOptional({ minimum: 1, default: 1 })
-  @IsOptional()
-  @Type(() => Number)
-  @IsInt()
-  @Min(1)
-  page?: number;
-
-  @ApiPropertyOptional({ minimum: 1, maximum: MAX_CASES_PAGE_SIZE, default: 20 })
-  @IsOptional()
-  @Type(() => Number)
-  @IsInt()
-  @Min(1)
-  @Max(MAX_CASES_PAGE_SIZE)
-  pageSize?: number;
-}
+export class CaseListQueryDto extends PageQuery(CASES_PAGE) {}
 
 /** A record for the web views: id, version, server times and the record fields in one flat object. */
 export type FlatRecord = Record<string, unknown> & { id: string; version: number };

@@ -1,34 +1,21 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { Transform, Type } from 'class-transformer';
-import { IsIn, IsInt, IsOptional, IsString, Length, Max, Min, ValidateIf } from 'class-validator';
+import { Transform } from 'class-transformer';
+import { IsIn, IsInt, IsOptional, IsString, Length, Min, ValidateIf } from 'class-validator';
 import { ESCALATION_ACTIONS, ESCALATION_STATUSES, PPE_LEVELS, type EscalationAction, type EscalationStatus, type PpeLevel } from '../../scans/escalation.entity';
+import { PageQuery, type PageLimits } from '../../common/page-query';
 
-export const MAX_ESCALATIONS_PAGE_SIZE = 100;
+/** `GET /api/escalations` pages: 25 escalations unless asked, at most 100. */
+export const ESCALATIONS_PAGE: PageLimits = { defaultPageSize: 25, maxPageSize: 100 };
 
 const trimmed = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
 
 /** `GET /api/escalations` query. */
-export class EscalationListQueryDto {
+export class EscalationListQueryDto extends PageQuery(ESCALATIONS_PAGE) {
   @ApiPropertyOptional({ description: `Comma-separated statuses (${ESCALATION_STATUSES.join(', ')}); all when left out`, example: 'raised,acknowledged' })
   @IsOptional()
   @Transform(({ value }) => (typeof value === 'string' ? value.split(',').map((part) => part.trim()).filter(Boolean) : value))
   @IsIn(ESCALATION_STATUSES, { each: true, message: `status must be a comma-separated list of ${ESCALATION_STATUSES.join(', ')}` })
   status?: EscalationStatus[];
-
-  @ApiPropertyOptional({ minimum: 1, default: 1 })
-  @IsOptional()
-  @Type(() => Number)
-  @IsInt()
-  @Min(1)
-  page?: number;
-
-  @ApiPropertyOptional({ minimum: 1, maximum: MAX_ESCALATIONS_PAGE_SIZE, default: 25 })
-  @IsOptional()
-  @Type(() => Number)
-  @IsInt()
-  @Min(1)
-  @Max(MAX_ESCALATIONS_PAGE_SIZE)
-  pageSize?: number;
 }
 
 /** `POST /api/escalations/:id/acknowledge`. */

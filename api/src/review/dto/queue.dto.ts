@@ -3,31 +3,17 @@ import { HAZARD_RANK_LABELS, MAX_HAZARD_RANK, type HazardRank, type HazardRankLa
 import { Transform, Type } from 'class-transformer';
 import { ArrayNotEmpty, IsIn, IsInt, IsISO8601, IsOptional, IsString, IsUUID, Length, Max, Min } from 'class-validator';
 import { CASE_STATUSES, type CaseStatus } from '../../cases/case.entity';
+import { PageQuery, type PageLimits } from '../../common/page-query';
 
-export const MAX_QUEUE_PAGE_SIZE = 100;
-export const DEFAULT_QUEUE_PAGE_SIZE = 25;
+/** Review queue pages: 25 cases unless asked, at most 100. */
+export const QUEUE_PAGE: PageLimits = { defaultPageSize: 25, maxPageSize: 100 };
 export const QUEUE_SORTS = ['startedAt', 'submittedAt', 'siteName', 'inspector', 'status', 'highestHazard'] as const;
 export type QueueSort = (typeof QUEUE_SORTS)[number];
 /** Without a status filter the queue shows every case that left the tablet (all but `open`). */
 export const DEFAULT_QUEUE_STATUSES = CASE_STATUSES.filter((status) => status !== 'open');
 
 /** `GET /api/review/queue` and `GET /api/review/queue.csv`: paging (ignored by the CSV), sort and filters. */
-export class QueueQueryDto {
-  @ApiPropertyOptional({ minimum: 1, default: 1 })
-  @IsOptional()
-  @Type(() => Number)
-  @IsInt()
-  @Min(1)
-  page?: number;
-
-  @ApiPropertyOptional({ minimum: 1, maximum: MAX_QUEUE_PAGE_SIZE, default: DEFAULT_QUEUE_PAGE_SIZE })
-  @IsOptional()
-  @Type(() => Number)
-  @IsInt()
-  @Min(1)
-  @Max(MAX_QUEUE_PAGE_SIZE)
-  pageSize?: number;
-
+export class QueueQueryDto extends PageQuery(QUEUE_PAGE) {
   @ApiPropertyOptional({ enum: QUEUE_SORTS, default: 'highestHazard' })
   @IsOptional()
   @IsIn(QUEUE_SORTS, { message: `sort must be one of ${QUEUE_SORTS.join(', ')}` })
