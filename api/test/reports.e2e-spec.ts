@@ -5,6 +5,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { identifySpectrum, importSpectrum, RAMAN_LASER_CAUTION, scanResultRecord } from '@siteband/shared';
 import { convert } from 'jcampconverter';
+import { entryHash } from '../src/audit/audit-hash';
 import { REPORT_SECTIONS } from '../src/reports/case-report-document';
 import { ScanRecomputeQueue } from '../src/scans/scan-recompute.queue';
 import { demo, push, sha256, upsert, uploadWhole } from './support/field-records';
@@ -218,7 +219,7 @@ describe('Scan export and case report (e2e, MariaDB + S3 fake)', () => {
         'Sacks stacked against a warm wall', 'Raman shift (cm-1); red ticks: picked peaks', 'From the server recomputation from the raw file',
         serverResult.candidates[0].name, 'Explained peaks', 'Missing bands', 'Evidence against',
         'Identification is presumptive', 'Confirm by laboratory analysis', RAMAN_LASER_CAUTION.slice(0, 60),
-        'Likely oxidiser stored beside diesel drums', 'Not signed off: the case is submitted.', 'The audit chain verified intact',
+        'Likely oxidiser stored beside diesel drums', 'Not signed off: the case is submitted.', 'audit entries verified intact',
       ]) {
         expect({ value, found: text.includes(value) }).toEqual({ value, found: true });
       }
@@ -256,6 +257,54 @@ describe('Scan export and case report (e2e, MariaDB + S3 fake)', () => {
       expect(text).toContain('has no raw file on the server');
       expect(text).toContain('is not completely uploaded yet');
       expect(text).toContain('cannot be read');
+    });
+
+    describe("the audit summary vouches for the case's own entries (append-only triggers dropped, as by someone with DDL rights)", () => {
+      type Row = Record<string, unknown> & { seq: string; caseId: string | null; after: string | null; hash: string };
+      const rowsOf = async (ofCase: string): Promise<Row[]> => t.dataSource.query('SELECT * FROM audit_log WHERE caseId = ? ORDER BY seq', [ofCase]);
+      const put = (seq: string, fields: Record<string, unknown>) =>
+        t.dataSource.query(`UPDATE audit_log SET ${Object.keys(fields).map((name) => `\`${name}\` = ?`).join(', ')} WHERE seq = ?`, [...Object.values(fields), seq]);
+      const changed = (row: Row) => JSON.stringify({ ...JSON.parse(row.after ?? '{}'), siteName: 'Nothing happened here' });
+      const audited = async (ofCase: string) => {
+        const text = await pdfText(supervisor, ofCase);
+        return text.slice(text.lastIndexOf('Audit summary'));
+      };
+
+      beforeAll(async () => {
+        await t.dataSource.query('DROP TRIGGER audit_log_no_update');
+        await t.dataSource.query('DROP TRIGGER audit_log_no_delete');
+      });
+
+      it("reports a changed entry of this case, and not a changed entry of another case", async () => {
+        const mine = await rowsOf(reportCase);
+        const others = await rowsOf(caseId);
+        expect(await audited(reportCase)).toContain(`This case's ${mine.length} audit entries verified intact`);
+
+        const other = others[1];
+        await put(other.seq, { after: changed(other) });
+        expect(await audited(reportCase)).toContain(`This case's ${mine.length} audit entries verified intact`);
+        expect(await audited(caseId)).toContain(`audit trail is BROKEN at entry ${other.seq}: content hash mismatch`);
+        expect((await t.http().get('/api/audit/verify').set('Authorization', `Bearer ${admin}`).expect(200)).body.firstBroken.seq).toBe(Number(other.seq));
+        await put(other.seq, { after: other.after });
+
+        const target = mine[1];
+        await put(target.seq, { after: changed(target) });
+        expect(await audited(reportCase)).toContain(`audit trail is BROKEN at entry ${target.seq}: content hash mismatch`);
+        await put(target.seq, { after: target.after });
+        expect(await audited(reportCase)).toContain('verified intact');
+      });
+
+      it('reports an entry rehashed after a change by the link of the entry after it', async () => {
+        const mine = await rowsOf(reportCase);
+        const at = mine.findIndex((row, i) => i + 1 < mine.length && Number(mine[i + 1].seq) === Number(row.seq) + 1);
+        expect(at).toBeGreaterThanOrEqual(0);
+        const original = mine[at];
+        const after = changed(original);
+        await put(original.seq, { after, hash: entryHash({ ...original, seq: Number(original.seq), after } as never) });
+        expect(await audited(reportCase)).toContain(`audit trail is BROKEN at entry ${mine[at + 1].seq}: prevHash mismatch`);
+        await put(original.seq, { after: original.after, hash: original.hash });
+        expect(await audited(reportCase)).toContain('verified intact');
+      });
     });
   });
 });

@@ -15,8 +15,23 @@ export interface ChainPosition {
 }
 
 /**
- * Checks the next entry of a walk in seq order: no seq skipped or repeated, its content still gives its
- * hash, and it names the previous entry's hash. Returns the first broken link, or null.
+ * Checks one entry against the entry before it (`prevHash`: that entry's stored hash, the genesis hash
+ * for entry 1): its content still gives its hash, and it names the previous entry's hash. Returns the
+ * broken link, or null.
+ */
+export function checkEntry(entry: AuditEntry, prevHash: string): BrokenLink | null {
+  if (entryHash(entry) !== entry.hash) {
+    return { seq: entry.seq, reason: 'content hash mismatch: the entry was changed after it was written' };
+  }
+  if (entry.prevHash !== prevHash) {
+    return { seq: entry.seq, reason: `prevHash mismatch: it does not name the hash of entry ${entry.seq - 1}` };
+  }
+  return null;
+}
+
+/**
+ * Checks the next entry of a walk in seq order: no seq skipped or repeated, then `checkEntry`.
+ * Returns the first broken link, or null.
  */
 export function checkLink(entry: AuditEntry, position: ChainPosition): BrokenLink | null {
   if (entry.seq !== position.nextSeq) {
@@ -24,13 +39,7 @@ export function checkLink(entry: AuditEntry, position: ChainPosition): BrokenLin
       ? { seq: position.nextSeq, reason: `gap in seq: entry ${position.nextSeq} is missing (the next one is ${entry.seq})` }
       : { seq: entry.seq, reason: `seq out of order: ${entry.seq} found where ${position.nextSeq} was expected` };
   }
-  if (entryHash(entry) !== entry.hash) {
-    return { seq: entry.seq, reason: 'content hash mismatch: the entry was changed after it was written' };
-  }
-  if (entry.prevHash !== position.prevHash) {
-    return { seq: entry.seq, reason: `prevHash mismatch: it does not name the hash of entry ${entry.seq - 1}` };
-  }
-  return null;
+  return checkEntry(entry, position.prevHash);
 }
 
 /** The answer of a walk: every entry checked, or the first broken link. */
@@ -77,4 +86,20 @@ function checkTail(head: AuditChainHead, position: ChainPosition): BrokenLink | 
     return { seq: lastSeq, reason: `the chain head names entry ${head.lastSeq} with another hash than the last entry ${lastSeq}` };
   }
   return null;
+}
+
+/**
+ * Checks some entries (one case's, in seq order) each by `checkEntry` against its predecessor
+ * (`hashBefore`: the stored hash of the entry at seq - 1, whoever's it is; undefined when that entry is
+ * missing). Vouches for these entries and their links only, not for the rest of the chain.
+ */
+export function checkEntries(entries: readonly AuditEntry[], hashBefore: (seq: number) => string | undefined): ChainReport {
+  let checked = 0;
+  for (const entry of entries) {
+    const prevHash = entry.seq === 1 ? GENESIS_HASH : hashBefore(entry.seq);
+    const broken = prevHash === undefined ? { seq: entry.seq - 1, reason: `gap in seq: entry ${entry.seq - 1}, the one before entry ${entry.seq}, is missing` } : checkEntry(entry, prevHash);
+    if (broken) return { ok: false, checked, firstBroken: broken };
+    checked += 1;
+  }
+  return { ok: true, checked };
 }

@@ -1,9 +1,9 @@
 import { Injectable } from '@nestjs/common';
 import type { Role } from '@siteband/shared';
-import { DataSource, type EntityManager } from 'typeorm';
+import { DataSource, In, type EntityManager } from 'typeorm';
 import { pageOf } from '../common/page-query';
 import { AUDIT_CHAIN_HEAD_ID, AuditChainHead } from './audit-chain-head.entity';
-import { walkChain } from './audit-chain';
+import { checkEntries, walkChain } from './audit-chain';
 import { AuditEntry } from './audit-entry.entity';
 import { canonicalJson, entryHash } from './audit-hash';
 import { AUDIT_PAGE, AuditEntryDto, type AuditListDto, type AuditListQueryDto, type AuditVerifyDto } from './dto/audit.dto';
@@ -107,6 +107,24 @@ export class AuditService {
           .limit(limit)
           .getMany(),
       );
+    });
+  }
+
+  /**
+   * Checks one case's entries only (`checkEntries`): each entry's hash recomputed and its link to the
+   * entry before it, in one read snapshot. What a case report vouches for; the rest of the chain is
+   * `verify`'s.
+   */
+  verifyCase(caseId: string): Promise<AuditVerifyDto> {
+    return this.dataSource.transaction('REPEATABLE READ', async (manager) => {
+      const entries = await manager.find(AuditEntry, { where: { caseId }, order: { seq: 'ASC' } });
+      const before = entries.filter((entry) => entry.seq > 1).map((entry) => entry.seq - 1);
+      const predecessors = new Map<number, string>();
+      for (let i = 0; i < before.length; i += VERIFY_PAGE) {
+        const rows = await manager.find(AuditEntry, { select: { seq: true, hash: true }, where: { seq: In(before.slice(i, i + VERIFY_PAGE)) } });
+        for (const row of rows) predecessors.set(row.seq, row.hash);
+      }
+      return checkEntries(entries, (seq) => predecessors.get(seq - 1));
     });
   }
 

@@ -277,8 +277,8 @@ function escalationsSection(data: CaseReportData): Content[] {
 function auditSection(data: CaseReportData): Content[] {
   const { chain } = data.audit;
   const verdict = chain.ok
-    ? `The audit chain verified intact over all ${chain.checked} entries when this report was made.`
-    : `The audit chain is BROKEN at entry ${chain.firstBroken?.seq}: ${chain.firstBroken?.reason}. Tell an administrator.`;
+    ? `This case's ${chain.checked} audit entries verified intact when this report was made: each entry's hash recomputed and its link to the entry before it.`
+    : `This case's audit trail is BROKEN at entry ${chain.firstBroken?.seq}: ${chain.firstBroken?.reason}. Tell an administrator.`;
   return [
     heading('Audit summary'),
     keyValues([

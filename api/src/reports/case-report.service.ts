@@ -76,7 +76,7 @@ export class CaseReportService {
       entries: Number(range?.entries ?? 0),
       firstAt: range?.firstAt ? new Date(range.firstAt).toISOString() : null,
       lastAt: range?.lastAt ? new Date(range.lastAt).toISOString() : null,
-      chain: await this.audit.verify(),
+      chain: await this.audit.verifyCase(caseId),
     };
   }
 }
