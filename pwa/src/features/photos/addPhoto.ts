@@ -1,9 +1,9 @@
+import { sha256Hex } from '@siteband/shared';
 import type { SitebandDb } from '../../db/db';
 import type { PhotoData } from '../../db/photosTable';
 import { recordUpsert } from '../sync/recordChange';
 import { compressPhoto } from './compressPhoto';
 import { MAX_PHOTO_BYTES, PHOTO_TYPES } from './photoTypes';
-import { sha256Hex } from './sha256';
 
 /** Keeps a photo of a sample (or case) on the tablet with its SHA-256, queued for upload. */
 export async function addPhoto(

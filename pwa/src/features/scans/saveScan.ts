@@ -1,4 +1,4 @@
-import { scanResultRecord } from '@siteband/shared';
+import { scanResultRecord, sha256Hex } from '@siteband/shared';
 import type { SitebandDb } from '../../db/db';
 import type { CaseCheckData } from '../../db/caseChecksTable';
 import type { InstrumentCheckRow } from '../../db/instrumentChecksTable';
@@ -6,7 +6,6 @@ import type { PhotoData } from '../../db/photosTable';
 import type { ScanData } from '../../db/scansTable';
 import type { IdentifyOutcome, ScanFile } from '../identify/protocol';
 import type { ScanSettings } from '../identify/scanSettings';
-import { sha256Hex } from '../photos/sha256';
 import { captureScope } from '../sync/captureTables';
 import { recordUpsert } from '../sync/recordChange';
 import { escalationData } from './escalationData';

@@ -3,6 +3,7 @@
  * (so a re-sent changeId answers `duplicate`), conflicts on a stale base version, a rejection rule,
  * a pull cursor and chunked uploads with SHA-256. It follows PROTOCOL.md, not the server's code.
  */
+import { sha256Hex } from '@siteband/shared';
 import type { ServerRecord } from '../../db/captureRecord';
 import type { ChangeEnvelope, ChangeResult } from './syncTypes';
 
@@ -30,11 +31,6 @@ export interface TestServer {
 
 function json(body: unknown, status = 200): Response {
   return new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
-}
-
-async function sha256Hex(bytes: Uint8Array): Promise<string> {
-  const digest = await crypto.subtle.digest('SHA-256', bytes as BufferSource);
-  return [...new Uint8Array(digest)].map((b) => b.toString(16).padStart(2, '0')).join('');
 }
 
 /** Builds a fresh test server. */
