@@ -3,15 +3,11 @@
 // (with a browser notification), the safety officer acknowledges it, and the inspector's tablet shows
 // who acknowledged it, with which action, after the next sync. Registered in run.mjs.
 import assert from 'node:assert/strict';
-import { readFileSync } from 'node:fs';
-import { dirname, join } from 'node:path';
 import { after, before, describe, it } from 'node:test';
-import { fileURLToPath } from 'node:url';
 import { blockingViolations } from './axe.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
+import { recordHazardousScan } from './hazardousScan.mjs';
 import { apiToken, signInTo, signOut, waitForPage } from './shell.mjs';
-
-const SPECTRA = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'fixtures', 'spectra');
 
 async function assertAccessible(page, where) {
   assert.deepEqual(await blockingViolations(page), [], `axe found serious or critical problems on ${where}`);
@@ -69,18 +65,7 @@ export function escalationTests({ baseUrl, password }) {
       await page.getByTestId(`case-${caseId}`).filter({ visible: true }).waitFor({ timeout: 30_000 });
       await page.goto(`${baseUrl}/tabs/cases/${caseId}/samples/${sampleId}`);
       await waitForPage(page, 'Sample GS3-01');
-      await page.getByTestId('add-scan').filter({ visible: true }).click();
-      await waitForPage(page, 'New scan of GS3-01');
-      await page.getByLabel('Raman', { exact: true }).check();
-      await page.getByLabel('785 nm', { exact: true }).check();
-      const name = 'synthetic-raman-ammonium-nitrate-785.csv';
-      await page.getByTestId('scan-file').last().setInputFiles({ name, mimeType: 'text/csv', buffer: readFileSync(join(SPECTRA, name)) });
-      await page.getByTestId('candidate-ammonium-nitrate').last().waitFor({ timeout: 30_000 });
-      await page.getByLabel(/I have read the caution cards/).check();
-      await page.getByRole('button', { name: 'Acknowledge and mark reviewed by inspector' }).last().click();
-      await page.getByTestId('save-scan').last().click();
-      await waitForPage(page, 'Scan of GS3-01');
-      await page.getByTestId('scan-escalation').filter({ visible: true }).waitFor();
+      await recordHazardousScan(page, 'GS3-01');
       await page.goto(`${baseUrl}/tabs/cases/${caseId}`);
       await waitForPage(page, site);
       await page.getByTestId('sync-now').filter({ visible: true }).click();

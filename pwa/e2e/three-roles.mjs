@@ -6,17 +6,13 @@
 // The site and people are an invented demo scenario.
 import assert from 'node:assert/strict';
 import { execFileSync } from 'node:child_process';
-import { readFileSync } from 'node:fs';
-import { dirname, join } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { after, before, describe, it } from 'node:test';
 import { blockingViolations } from './axe.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
 import { readCapture, waitForSynced } from './capture.mjs';
+import { recordHazardousScan } from './hazardousScan.mjs';
 import { waitForMail } from './inbox.mjs';
 import { signInTo, waitForPage } from './shell.mjs';
-
-const SPECTRA = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'fixtures', 'spectra');
 
 async function assertAccessible(page, where) {
   assert.deepEqual(await blockingViolations(page), [], `axe found serious or critical problems on ${where}`);
@@ -65,19 +61,7 @@ export function threeRoleTests({ baseUrl, password }) {
       await page.getByRole('button', { name: 'Save sample' }).filter({ visible: true }).click();
       await waitForPage(page, 'Sample TR-01');
 
-      await page.getByTestId('add-scan').filter({ visible: true }).click();
-      await waitForPage(page, 'New scan of TR-01');
-      await page.getByLabel('Raman', { exact: true }).check();
-      await page.getByLabel('785 nm', { exact: true }).check();
-      const name = 'synthetic-raman-ammonium-nitrate-785.csv';
-      await page.getByTestId('scan-file').last().setInputFiles({ name, mimeType: 'text/csv', buffer: readFileSync(join(SPECTRA, name)) });
-      await page.getByTestId('candidate-ammonium-nitrate').last().waitFor({ timeout: 30_000 });
-      await page.getByLabel(/I have read the caution cards/).check();
-      await page.getByRole('button', { name: 'Acknowledge and mark reviewed by inspector' }).last().click();
-      await page.getByTestId('save-scan').last().click();
-      await waitForPage(page, 'Scan of TR-01');
-      await page.getByTestId('scan-escalation').filter({ visible: true }).waitFor();
-      scanId = page.url().split('/').pop();
+      scanId = await recordHazardousScan(page, 'TR-01');
 
       await page.goto(`${baseUrl}/tabs/cases/${caseId}`);
       await waitForPage(page, site);

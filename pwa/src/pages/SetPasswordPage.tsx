@@ -1,10 +1,9 @@
-import { useEffect, useRef, useState, type FormEvent } from 'react';
-import { IonButton, IonContent, IonInput, IonPage } from '@ionic/react';
+import { useEffect, useState, type FormEvent } from 'react';
+import { IonButton, IonInput } from '@ionic/react';
 import { MAX_PASSWORD_BYTES, MIN_PASSWORD_LENGTH, passwordPolicyBreach } from '@siteband/shared';
 import { useTranslation } from 'react-i18next';
 import { useNavigate, useSearchParams } from 'react-router-dom';
-import { BrandMark } from '../components/BrandMark';
-import { ConnectionBadge } from '../components/ConnectionBadge';
+import { FormError, SignInLayout } from '../components/session/SignInLayout';
 import { useApiClient } from '../features/api/ApiClientContext';
 import { ApiError } from '../features/api/apiError';
 import { setPassword } from '../features/session/authApi';
@@ -21,15 +20,10 @@ export default function SetPasswordPage() {
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string>();
   const [linkRefused, setLinkRefused] = useState(false);
-  const errorRef = useRef<HTMLParagraphElement>(null);
 
   useEffect(() => {
     document.title = t('app.documentTitle', { page: t('invite.setTitle') });
   }, [t]);
-
-  useEffect(() => {
-    if (error) errorRef.current?.focus();
-  }, [error]);
 
   async function submit(event: FormEvent) {
     event.preventDefault();
@@ -53,59 +47,42 @@ export default function SetPasswordPage() {
   const refusal = !token ? t('invite.noToken') : linkRefused ? t('invite.linkRefused') : undefined;
 
   return (
-    <IonPage>
-      <IonContent className="sb-signin">
-        <main className="sb-signin__layout">
-          <div className="sb-signin__top">
-            <BrandMark size={56} />
-            <ConnectionBadge />
-          </div>
-          <section className="sb-panel sb-signin__card" aria-labelledby="set-password-title">
-            <h1 id="set-password-title" className="sb-page-title">
-              {t('invite.setTitle')}
-            </h1>
-            {refusal ? (
-              <p className="sb-error" role="alert" data-testid="set-password-refused">
-                {refusal}
-              </p>
-            ) : (
-              <form onSubmit={submit} noValidate>
-                <p className="sb-muted">{t('invite.setIntro', { min: MIN_PASSWORD_LENGTH })}</p>
-                <IonInput
-                  className="sb-input"
-                  label={t('invite.newPassword')}
-                  labelPlacement="stacked"
-                  fill="outline"
-                  type="password"
-                  autocomplete="new-password"
-                  name="new-password"
-                  value={password}
-                  onIonInput={(e) => setPasswordText(String(e.detail.value ?? ''))}
-                />
-                <IonInput
-                  className="sb-input"
-                  label={t('invite.repeatPassword')}
-                  labelPlacement="stacked"
-                  fill="outline"
-                  type="password"
-                  autocomplete="new-password"
-                  name="repeat-password"
-                  value={repeat}
-                  onIonInput={(e) => setRepeat(String(e.detail.value ?? ''))}
-                />
-                {error && (
-                  <p className="sb-error" role="alert" tabIndex={-1} ref={errorRef}>
-                    {error}
-                  </p>
-                )}
-                <IonButton type="submit" expand="block" className="sb-primary" disabled={busy}>
-                  {busy ? t('invite.setting') : t('invite.setSubmit')}
-                </IonButton>
-              </form>
-            )}
-          </section>
-        </main>
-      </IonContent>
-    </IonPage>
+    <SignInLayout titleId="set-password-title" title={t('invite.setTitle')}>
+      {refusal ? (
+        <p className="sb-error" role="alert" data-testid="set-password-refused">
+          {refusal}
+        </p>
+      ) : (
+        <form onSubmit={submit} noValidate>
+          <p className="sb-muted">{t('invite.setIntro', { min: MIN_PASSWORD_LENGTH })}</p>
+          <IonInput
+            className="sb-input"
+            label={t('invite.newPassword')}
+            labelPlacement="stacked"
+            fill="outline"
+            type="password"
+            autocomplete="new-password"
+            name="new-password"
+            value={password}
+            onIonInput={(e) => setPasswordText(String(e.detail.value ?? ''))}
+          />
+          <IonInput
+            className="sb-input"
+            label={t('invite.repeatPassword')}
+            labelPlacement="stacked"
+            fill="outline"
+            type="password"
+            autocomplete="new-password"
+            name="repeat-password"
+            value={repeat}
+            onIonInput={(e) => setRepeat(String(e.detail.value ?? ''))}
+          />
+          <FormError message={error} />
+          <IonButton type="submit" expand="block" className="sb-primary" disabled={busy}>
+            {busy ? t('invite.setting') : t('invite.setSubmit')}
+          </IonButton>
+        </form>
+      )}
+    </SignInLayout>
   );
 }

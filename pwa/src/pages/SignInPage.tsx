@@ -1,9 +1,8 @@
 import { useEffect, useRef, useState, type FormEvent } from 'react';
-import { IonButton, IonContent, IonInput, IonPage } from '@ionic/react';
+import { IonButton, IonInput } from '@ionic/react';
 import { useNavigate, useSearchParams } from 'react-router-dom';
 import { useTranslation } from 'react-i18next';
-import { BrandMark } from '../components/BrandMark';
-import { ConnectionBadge } from '../components/ConnectionBadge';
+import { FormError, SignInLayout } from '../components/session/SignInLayout';
 import { homePathForRole } from '../features/navigation/roleTabs';
 import { useOnlineStatus } from '../features/network/onlineStatus';
 import { useSession } from '../features/session/SessionProvider';
@@ -23,7 +22,6 @@ export default function SignInPage() {
   const [error, setError] = useState<string>();
   const [busy, setBusy] = useState(false);
   const [sessionEnded, setSessionEnded] = useState(status === 'expired');
-  const errorRef = useRef<HTMLParagraphElement>(null);
   const sentHome = useRef(false);
   const usable = session !== undefined && (status === 'online' || status === 'offline');
   const home = session ? homePathForRole(session.user.role) : undefined;
@@ -38,10 +36,6 @@ export default function SignInPage() {
     setSessionEnded(true);
     if (online) void signOut();
   }, [status, online, signOut]);
-
-  useEffect(() => {
-    if (error) errorRef.current?.focus();
-  }, [error]);
 
   // One navigation per sign-in, whether the session was just created or already there: Ionic keeps
   // this page mounted in its stack, and a second navigation would interrupt the tab page's entry.
@@ -72,67 +66,49 @@ export default function SignInPage() {
   }
 
   return (
-    <IonPage>
-      <IonContent className="sb-signin">
-        <main className="sb-signin__layout">
-          <div className="sb-signin__top">
-            <BrandMark size={56} />
-            <ConnectionBadge />
-          </div>
-          <p className="sb-signin__tagline">{t('app.tagline')}</p>
-          <section className="sb-panel sb-signin__card" aria-labelledby="signin-title">
-            <h1 id="signin-title" className="sb-page-title">
-              {t('signIn.title')}
-            </h1>
-            <p className="sb-muted">{t('signIn.intro', { hours: formatHours(offlineSessionHours, i18n.language) })}</p>
-            {passwordSet && (
-              <p className="sb-success" role="status">
-                {t('invite.setDone')}
-              </p>
-            )}
-            {sessionEnded && (
-              <p className="sb-notice" role="status">
-                {t('signIn.expired')} {!online && t('signIn.expiredOffline')}
-              </p>
-            )}
-            <form onSubmit={submit} noValidate>
-              <IonInput
-                className="sb-input"
-                label={t('signIn.email')}
-                labelPlacement="stacked"
-                fill="outline"
-                type="email"
-                inputmode="email"
-                autocomplete="username"
-                name="email"
-                required
-                value={email}
-                onIonInput={(e) => setEmail(String(e.detail.value ?? ''))}
-              />
-              <IonInput
-                className="sb-input"
-                label={t('signIn.password')}
-                labelPlacement="stacked"
-                fill="outline"
-                type="password"
-                autocomplete="current-password"
-                name="password"
-                required
-                value={password}
-                onIonInput={(e) => setPassword(String(e.detail.value ?? ''))}
-              />
-              {error && (
-                <p className="sb-error" role="alert" tabIndex={-1} ref={errorRef}>
-                  {error}
-                </p>
-              )}
-              <IonButton type="submit" expand="block" className="sb-primary" disabled={busy}>
-                {busy ? t('signIn.submitting') : t('signIn.submit')}
-              </IonButton>
-            </form>
-          </section>
-        </main>
-      </IonContent>
-    </IonPage>
+    <SignInLayout titleId="signin-title" title={t('signIn.title')} tagline={t('app.tagline')}>
+      <p className="sb-muted">{t('signIn.intro', { hours: formatHours(offlineSessionHours, i18n.language) })}</p>
+      {passwordSet && (
+        <p className="sb-success" role="status">
+          {t('invite.setDone')}
+        </p>
+      )}
+      {sessionEnded && (
+        <p className="sb-notice" role="status">
+          {t('signIn.expired')} {!online && t('signIn.expiredOffline')}
+        </p>
+      )}
+      <form onSubmit={submit} noValidate>
+        <IonInput
+          className="sb-input"
+          label={t('signIn.email')}
+          labelPlacement="stacked"
+          fill="outline"
+          type="email"
+          inputmode="email"
+          autocomplete="username"
+          name="email"
+          required
+          value={email}
+          onIonInput={(e) => setEmail(String(e.detail.value ?? ''))}
+        />
+        <IonInput
+          className="sb-input"
+          label={t('signIn.password')}
+          labelPlacement="stacked"
+          fill="outline"
+          type="password"
+          autocomplete="current-password"
+          name="password"
+          required
+          value={password}
+          onIonInput={(e) => setPassword(String(e.detail.value ?? ''))}
+        />
+        <FormError message={error} />
+        <IonButton type="submit" expand="block" className="sb-primary" disabled={busy}>
+          {busy ? t('signIn.submitting') : t('signIn.submit')}
+        </IonButton>
+      </form>
+    </SignInLayout>
   );
 }
