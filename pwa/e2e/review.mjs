@@ -43,8 +43,9 @@ export function reviewTests({ baseUrl, password }) {
       await form.getByLabel('Site name contains').fill(site);
       await form.getByRole('button', { name: 'Apply filters' }).click();
       const row = page.getByTestId(`queue-item-${field.caseId}`);
+      // The case is on the unfiltered first page too: wait for the filtered count, not only for its row.
+      await page.getByTestId('queue-count').filter({ hasText: /^\s*1 case matches\.\s*$/ }).waitFor();
       await row.waitFor();
-      assert.equal((await page.getByTestId('queue-count').textContent()).trim(), '1 case matches.');
       assert.match(await row.textContent(), /Submitted.*Demo Inspector|Submitted/s);
       assert.match(await row.textContent(), /Ethanol/);
       assert.match(page.url(), /[?&]site=/);
@@ -97,6 +98,10 @@ export function reviewTests({ baseUrl, password }) {
 
     it('refuses a decision made on an old version of the case, and decides again after a reload', async () => {
       const { page } = browser;
+      // The page's live refresh is held back (its reads of the case fail) until the decision is sent,
+      // so the page decides on the version it showed however slowly the steps below run.
+      const caseUrl = `${baseUrl}/api/review/cases/${field.caseId}`;
+      await page.route(caseUrl, (route) => route.abort());
       // Another supervisor decides meanwhile, through the API.
       const seen = await bundle();
       const other = await fetch(`${baseUrl}/api/review/cases/${field.caseId}/decisions`, {
@@ -113,6 +118,7 @@ export function reviewTests({ baseUrl, password }) {
       await scan.getByRole('button', { name: 'Record the decision' }).click();
       const stale = page.getByTestId('decision-stale');
       await stale.waitFor();
+      await page.unroute(caseUrl);
       await assertAccessible(page, 'the case review page with a stale decision');
       await stale.getByRole('button', { name: 'Reload the case' }).click();
       await scan.getByTestId('decision-line').filter({ hasText: 'Needs laboratory confirmation' }).first().waitFor();
