@@ -1,6 +1,6 @@
 import { createHash } from 'node:crypto';
 import type { AuditChainHead } from './audit-chain-head.entity';
-import { walkChain } from './audit-chain';
+import { checkEntries, walkChain } from './audit-chain';
 import type { AuditEntry } from './audit-entry.entity';
 import { canonicalJson, entryHash, GENESIS_HASH } from './audit-hash';
 
@@ -73,5 +73,24 @@ describe('walkChain', () => {
     expect((await walkChain(head, 3, reader(rehashed).read)).firstBroken).toEqual({ seq: 7, reason: expect.stringMatching(/^prevHash mismatch/) });
     expect((await walkChain(head, 3, reader(entries.slice(0, 6)).read)).firstBroken).toEqual({ seq: 7, reason: expect.stringMatching(/^gap in seq: entries 7 to 8/) });
     expect((await walkChain({ ...head, lastHash: GENESIS_HASH }, 3, reader(entries).read)).firstBroken).toEqual({ seq: 8, reason: expect.stringMatching(/chain head/) });
+  });
+});
+
+describe('checkEntries', () => {
+  const { entries } = chain(8);
+  const mine = [entries[0], entries[3], entries[4], entries[7]];
+  const hashBefore = (all: AuditEntry[]) => (seq: number) => all.find((entry) => entry.seq === seq - 1)?.hash;
+
+  it('vouches for some entries and their links, whatever the others hold', () => {
+    const others = entries.map((entry) => (mine.includes(entry) ? entry : { ...entry, after: canonicalJson({ n: 'changed' }) }));
+    expect(checkEntries(mine, hashBefore(others))).toEqual({ ok: true, checked: 4 });
+  });
+
+  it('names a changed entry, an entry whose predecessor was rehashed, and a missing predecessor', () => {
+    const changed = mine.map((entry) => (entry.seq === 5 ? { ...entry, after: canonicalJson({ n: 'changed' }) } : entry));
+    expect(checkEntries(changed, hashBefore(entries)).firstBroken).toEqual({ seq: 5, reason: expect.stringMatching(/^content hash mismatch/) });
+    const rehashed = entries.map((entry) => (entry.seq === 3 ? { ...entry, hash: 'f'.repeat(64) } : entry));
+    expect(checkEntries(mine, hashBefore(rehashed))).toEqual({ ok: false, checked: 1, firstBroken: { seq: 4, reason: expect.stringMatching(/^prevHash mismatch/) } });
+    expect(checkEntries(mine, hashBefore(entries.filter((entry) => entry.seq !== 7))).firstBroken).toEqual({ seq: 7, reason: expect.stringMatching(/^gap in seq/) });
   });
 });
