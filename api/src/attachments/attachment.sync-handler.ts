@@ -29,6 +29,10 @@ export const attachmentSyncHandler: SyncHandler<Attachment, AttachmentDataDto> =
     return caseId;
   },
 
+  async checkDelete(_ctx, existing) {
+    if (existing.kind === 'raw-scan') throw new ChangeRejected('A raw scan file is a permanent record: it cannot be deleted');
+  },
+
   assign(_ctx, row, data, { caseId, isNew }) {
     if (isNew) {
       row.receivedBytes = 0;

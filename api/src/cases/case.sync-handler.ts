@@ -1,3 +1,9 @@
+import { Attachment } from '../attachments/attachment.entity';
+import { SiteNote } from '../notes/site-note.entity';
+import { Sample } from '../samples/sample.entity';
+import { Escalation } from '../scans/escalation.entity';
+import { InstrumentCheck } from '../scans/instrument-check.entity';
+import { dependents, refuseWhileReferenced } from '../sync/delete-guards';
 import { ChangeRejected, type SyncHandler } from '../sync/sync-handler';
 import { assertOwnCase } from './case-access';
 import { Case } from './case.entity';
@@ -6,7 +12,8 @@ import { CaseDataDto } from './dto/case-data.dto';
 /**
  * Cases through sync: created by the pushing inspector, who alone changes them while open or submitted,
  * and reopens them (status `open`) after a supervisor returned them. Cases in review or accepted are the
- * supervisors' (the review routes); an accepted case is frozen until a supervisor reopens it.
+ * supervisors' (the review routes); an accepted case is frozen until a supervisor reopens it. Only an
+ * open case with nothing below it can be deleted.
  */
 export const caseSyncHandler: SyncHandler<Case, CaseDataDto> = {
   entity: 'case',
@@ -31,6 +38,17 @@ export const caseSyncHandler: SyncHandler<Case, CaseDataDto> = {
       throw new ChangeRejected('Only inspectors create cases');
     }
     return id;
+  },
+
+  async checkDelete(ctx, existing) {
+    if (existing.status !== 'open') throw new ChangeRejected(`Case ${existing.id} is ${existing.status}: only an open case can be deleted`);
+    await refuseWhileReferenced(ctx.manager, `Case ${existing.id}`, [
+      dependents(Sample, { caseId: existing.id }, 'samples'),
+      dependents(SiteNote, { caseId: existing.id }, 'site notes'),
+      dependents(Attachment, { caseId: existing.id }, 'attachments'),
+      dependents(InstrumentCheck, { caseId: existing.id }, 'instrument checks'),
+      dependents(Escalation, { caseId: existing.id }, 'escalations'),
+    ]);
   },
 
   assign(ctx, row, data, { isNew }) {

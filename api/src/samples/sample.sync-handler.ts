@@ -1,9 +1,14 @@
 import { writableCase } from '../cases/case-access';
+import { Attachment } from '../attachments/attachment.entity';
+import { SiteNote } from '../notes/site-note.entity';
+import { Scan } from '../scans/scan.entity';
+import { dependents, refuseWhileReferenced } from '../sync/delete-guards';
 import { ChangeRejected, type SyncHandler } from '../sync/sync-handler';
+import { Handover } from './handover.entity';
 import { SampleDataDto } from './dto/sample-data.dto';
 import { Sample } from './sample.entity';
 
-/** Samples through sync: they stay in the case they were created in. */
+/** Samples through sync: they stay in the case they were created in; one with a hand-over is kept for good. */
 export const sampleSyncHandler: SyncHandler<Sample, SampleDataDto> = {
   entity: 'sample',
   target: Sample,
@@ -18,6 +23,15 @@ export const sampleSyncHandler: SyncHandler<Sample, SampleDataDto> = {
     }
     await writableCase(ctx.manager, caseId, ctx.user);
     return caseId;
+  },
+
+  async checkDelete(ctx, existing) {
+    await refuseWhileReferenced(ctx.manager, `Sample ${existing.id}`, [
+      dependents(Handover, { sampleId: existing.id }, 'hand-overs'),
+      dependents(Scan, { sampleId: existing.id }, 'scans'),
+      dependents(SiteNote, { sampleId: existing.id }, 'site notes'),
+      dependents(Attachment, { ownerType: 'sample', ownerId: existing.id }, 'photos'),
+    ]);
   },
 
   assign(_ctx, row, data, { caseId }) {

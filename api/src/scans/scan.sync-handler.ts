@@ -1,7 +1,10 @@
 import { isDeepStrictEqual } from 'node:util';
 import { Attachment } from '../attachments/attachment.entity';
 import { writableSample } from '../samples/sample-parent';
+import { ReviewDecision } from '../review/review-decision.entity';
+import { dependents, refuseWhileReferenced } from '../sync/delete-guards';
 import { ChangeRejected, type ChangeContext, type SyncHandler } from '../sync/sync-handler';
+import { Escalation } from './escalation.entity';
 import { ScanDataDto } from './dto/scan-data.dto';
 import { InstrumentCheck } from './instrument-check.entity';
 import { Scan } from './scan.entity';
@@ -22,6 +25,15 @@ export const scanSyncHandler: SyncHandler<Scan, ScanDataDto> = {
     const sample = await writableSample(ctx.manager, existing?.sampleId ?? (data as ScanDataDto).sampleId, ctx.user);
     if (data) await checkLinks(ctx, id, data, sample.caseId);
     return sample.caseId;
+  },
+
+  /** Its raw file stays on the server (a permanent record); an escalation or a decision keeps the scan too. */
+  async checkDelete(ctx, existing) {
+    await refuseWhileReferenced(ctx.manager, `Scan ${existing.id}`, [
+      dependents(Escalation, { scanId: existing.id }, 'escalations'),
+      dependents(ReviewDecision, { scanId: existing.id }, 'review decisions'),
+      dependents(Attachment, { ownerType: 'scan', ownerId: existing.id, kind: 'photo' }, 'photos'),
+    ]);
   },
 
   assign(_ctx, row, data, { caseId, isNew }) {

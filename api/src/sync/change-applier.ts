@@ -164,6 +164,7 @@ export class ChangeApplier {
       if (change.baseVersion !== existing.version) return conflict(existing);
       if (handler.appendOnly) throw new ChangeRejected(`A ${change.entity} is a permanent record: it cannot be deleted`);
       if (existing.deletedAt) throw new ChangeRejected(`This ${change.entity} is already deleted`);
+      await handler.checkDelete?.(ctx, existing);
       const before = structuredClone(handler.toData(existing));
       existing.deletedAt = new Date();
       return this.write(ctx, handler, existing, writes, change.changeId, { caseId, action: 'delete', before });

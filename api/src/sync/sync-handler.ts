@@ -50,6 +50,11 @@ export interface SyncHandler<E extends SyncedRecord = SyncedRecord, D extends ob
    * Throws `ChangeRejected` on a forbidden change.
    */
   assign(ctx: ChangeContext, row: E, data: D, target: { caseId: string; isNew: boolean }): void | Promise<void>;
+  /**
+   * Refuses, with `ChangeRejected`, a delete that `authorize` lets through but this kind of record
+   * must not take (records still below it, a permanent file). Called after `authorize`.
+   */
+  checkDelete?(ctx: ChangeContext, existing: E): Promise<void>;
 }
 
 /**
