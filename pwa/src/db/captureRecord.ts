@@ -34,6 +34,16 @@ export interface CaptureRow<D> {
   conflictServer?: ServerRecord;
   /** Epoch milliseconds of the last local edit. */
   editedAt: number;
+  /**
+   * Deleted by the inspector, kept (hidden from the lists) until the server confirms the delete: a
+   * refused delete brings the record back with the reason.
+   */
+  deletePending?: true;
+}
+
+/** True for a record the inspector has not deleted on the tablet; lists show only these. */
+export function isLive(row: Pick<CaptureRow<unknown>, 'deletePending'>): boolean {
+  return row.deletePending !== true;
 }
 
 /** Dexie index spec shared by the capture tables: id, the owning case, and edit time for lists. */

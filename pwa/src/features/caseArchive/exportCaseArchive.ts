@@ -1,3 +1,4 @@
+import { isLive } from '../../db/captureRecord';
 import { ARCHIVE_ENTITIES, buildCaseArchive, IDENTIFY_METHOD_VERSION, type ArchiveAuthor, type ArchiveRecord } from '@siteband/shared';
 import { version as APP_VERSION } from '../../../package.json';
 import type { SitebandDb } from '../../db/db';
@@ -40,6 +41,8 @@ export async function exportCaseArchive(db: SitebandDb, caseId: string, author: 
     for (const entity of ARCHIVE_ENTITIES) {
       const rows = entity === 'case' ? [caseRow] : await tableFor(db, entity).where('caseId').equals(caseId).toArray();
       for (const row of rows) {
+        // A record deleted here travels as its delete through sync, never in an archive as if it stood.
+        if (!isLive(row)) continue;
         const entries = await entriesFor(db, entity, row.id);
         const only = entries.length === 1 && (entries[0].status === 'pending' || entries[0].status === 'sending') ? entries[0] : undefined;
         let version = row.version;

@@ -1,4 +1,5 @@
 import { useLiveQuery } from 'dexie-react-hooks';
+import { isLive } from '../../db/captureRecord';
 import type { CaseRow } from '../../db/casesTable';
 import { captureDb } from './captureDb';
 
@@ -12,7 +13,7 @@ export interface CaseListItem {
 export function useCaseList(): CaseListItem[] | undefined {
   return useLiveQuery(async () => {
     const db = captureDb();
-    const [cases, samples] = await Promise.all([db.cases.toArray(), db.samples.toArray()]);
+    const [cases, samples] = await Promise.all([db.cases.filter(isLive).toArray(), db.samples.filter(isLive).toArray()]);
     const counts = new Map<string, number>();
     for (const sample of samples) counts.set(sample.caseId, (counts.get(sample.caseId) ?? 0) + 1);
     return cases

@@ -1,11 +1,12 @@
 import { useLiveQuery } from 'dexie-react-hooks';
+import { isLive } from '../../db/captureRecord';
 import type { HandoverRow } from '../../db/handoversTable';
 import type { SampleRow } from '../../db/samplesTable';
 import { captureDb } from '../cases/captureDb';
 
 /** Live: the samples of a case in the order they were collected. */
 export function useSamples(caseId: string): SampleRow[] | undefined {
-  return useLiveQuery(async () => (await captureDb().samples.where('caseId').equals(caseId).toArray()).sort((a, b) => a.data.collectedAt.localeCompare(b.data.collectedAt)), [caseId]);
+  return useLiveQuery(async () => (await captureDb().samples.where('caseId').equals(caseId).filter(isLive).toArray()).sort((a, b) => a.data.collectedAt.localeCompare(b.data.collectedAt)), [caseId]);
 }
 
 /** Live: one sample; null when the tablet has none with that id. */

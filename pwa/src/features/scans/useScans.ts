@@ -1,4 +1,5 @@
 import { useLiveQuery } from 'dexie-react-hooks';
+import { isLive } from '../../db/captureRecord';
 import type { EscalationRow } from '../../db/escalationsTable';
 import type { PhotoRow } from '../../db/photosTable';
 import type { ScanRow } from '../../db/scansTable';
@@ -7,7 +8,7 @@ import { captureDb } from '../cases/captureDb';
 /** Live: a sample's scans, newest first. */
 export function useSampleScans(sampleId: string): ScanRow[] | undefined {
   return useLiveQuery(async () => {
-    const rows = await captureDb().scans.filter((s) => s.data.sampleId === sampleId).toArray();
+    const rows = await captureDb().scans.filter((s) => s.data.sampleId === sampleId && isLive(s)).toArray();
     return rows.sort((a, b) => b.data.recordedAt.localeCompare(a.data.recordedAt));
   }, [sampleId]);
 }

@@ -6,13 +6,19 @@ import type { ChangeResult } from './syncTypes';
 
 /**
  * Acts on the server's answer to one change, in one transaction with the record. A duplicate is
- * treated as the first answer it stands for. Only an applied change leaves the outbox.
+ * treated as the first answer it stands for. Only an applied change leaves the outbox, and an applied
+ * delete takes the record with it.
  */
 export async function applyResult(db: SitebandDb, entry: OutboxRow, result: ChangeResult): Promise<void> {
   const status = result.status === 'duplicate' ? (result.firstStatus ?? 'applied') : result.status;
   const table = tableFor(db, entry.entity);
   await db.transaction('rw', captureScope(db), async () => {
-    if (status === 'applied') {
+    if (status === 'applied' && entry.op === 'delete') {
+      // The server confirmed the delete: only now does the record leave the tablet.
+      await db.outbox.delete(entry.seq!);
+      await table.delete(entry.id);
+      return;
+    } else if (status === 'applied') {
       await db.outbox.delete(entry.seq!);
       if (result.version !== undefined) await table.update(entry.id, { version: result.version });
     } else if (status === 'conflict') {
@@ -21,6 +27,8 @@ export async function applyResult(db: SitebandDb, entry: OutboxRow, result: Chan
       if (result.server) await table.update(entry.id, { conflictServer: result.server });
     } else {
       await db.outbox.update(entry.seq!, { status: 'rejected', lastError: result.reason ?? 'Refused by the server' });
+      // A refused delete brings the record back, with the reason shown on it.
+      if (entry.op === 'delete') await table.update(entry.id, { deletePending: undefined });
     }
     await refreshSyncState(db, entry.entity, entry.id);
   });

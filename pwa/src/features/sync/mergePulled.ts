@@ -27,6 +27,12 @@ export async function mergePulled(db: SitebandDb, record: ServerRecord, now = Da
       await refreshSyncState(db, entity, record.id);
       return 'same';
     }
+    if (local?.deletePending && record.deleted) {
+      // Deleted on the server as on the tablet (our delete, its answer lost): nothing left to send.
+      await db.outbox.bulkDelete(entries.map((e) => e.seq!));
+      await table.delete(record.id);
+      return 'stored';
+    }
     if (local && entries.length > 0) {
       for (const entry of entries) await db.outbox.update(entry.seq!, { status: 'conflict', lastError: 'Changed on the server meanwhile' });
       await table.update(record.id, { conflictServer: record });

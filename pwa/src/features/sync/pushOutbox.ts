@@ -36,7 +36,7 @@ async function markSending(db: SitebandDb, batch: OutboxRow[]): Promise<ChangeEn
       if (entry.status === 'pending') baseVersion = (await tableFor(db, entry.entity).get(entry.id))?.version ?? null;
       await db.outbox.update(entry.seq!, { status: 'sending', baseVersion, attempts: entry.attempts + 1 });
       await refreshSyncState(db, entry.entity, entry.id);
-      envelopes.push({ changeId: entry.changeId, entity: entry.entity, op: entry.op, id: entry.id, baseVersion, data: entry.data });
+      envelopes.push({ changeId: entry.changeId, entity: entry.entity, op: entry.op, id: entry.id, baseVersion, ...(entry.op === 'upsert' ? { data: entry.data } : {}) });
     }
     return envelopes;
   });
@@ -51,6 +51,7 @@ async function noteFailure(db: SitebandDb, batch: OutboxRow[], message: string):
 async function refuse(db: SitebandDb, entry: OutboxRow, reason: string): Promise<void> {
   await db.transaction('rw', captureScope(db), async () => {
     await db.outbox.update(entry.seq!, { status: 'rejected', lastError: reason });
+    if (entry.op === 'delete') await tableFor(db, entry.entity).update(entry.id, { deletePending: undefined });
     await refreshSyncState(db, entry.entity, entry.id);
   });
 }

@@ -69,3 +69,54 @@ export async function recordUpsert<D extends object>(db: SitebandDb, edit: Recor
     await refreshSyncState(db, edit.entity, edit.id);
   });
 }
+
+/** Records the tablet never deletes (PROTOCOL.md): the chain of custody, instrument checks and escalations. */
+const PERMANENT: ReadonlySet<CaptureEntity> = new Set(['handover', 'instrumentCheck', 'escalation']);
+
+/** Thrown for a delete the tablet refuses before anything is written (a permanent record, a raw scan file). */
+export class PermanentRecordError extends Error {
+  constructor(entity: CaptureEntity) {
+    super(`A ${entity === 'attachment' ? 'raw scan file' : entity} is a permanent record: it is never deleted`);
+    this.name = 'PermanentRecordError';
+  }
+}
+
+/**
+ * Deletes a record on the tablet, in one transaction with its change. A record the server never had
+ * (no confirmed version, nothing sent) simply goes. Otherwise the record stays, hidden and marked
+ * `deletePending`, with a delete change queued after whatever is in flight: it leaves Dexie only when
+ * the server confirms the delete, and a refused delete brings it back with the reason. Unsent edits of
+ * it are dropped (a delete supersedes them); a conflict is settled in favour of the delete, from the
+ * server's version.
+ */
+export async function recordDelete(db: SitebandDb, entity: CaptureEntity, id: string, now = Date.now()): Promise<void> {
+  const table = tableFor(db, entity);
+  await db.transaction('rw', captureScope(db), async () => {
+    const row = await table.get(id);
+    if (!row) throw new Error(`There is no ${entity} ${id} on this tablet to delete`);
+    if (PERMANENT.has(entity) || (entity === 'attachment' && (row.data as { kind?: string }).kind === 'raw-scan')) throw new PermanentRecordError(entity);
+    const entries = await entriesFor(db, entity, id);
+    const inFlight = entries.filter((e) => e.status === 'sending');
+    if (row.version === null && inFlight.length === 0) {
+      await db.outbox.bulkDelete(entries.map((e) => e.seq!));
+      await table.delete(id);
+      return;
+    }
+    await db.outbox.bulkDelete(entries.filter((e) => e.status !== 'sending').map((e) => e.seq!));
+    const version = row.conflictServer?.version ?? row.version;
+    await table.put({ ...row, version, conflictServer: undefined, deletePending: true, editedAt: now });
+    await db.outbox.add({
+      changeId: crypto.randomUUID(),
+      entity,
+      op: 'delete',
+      id,
+      baseVersion: null,
+      data: {},
+      status: 'pending',
+      attempts: 0,
+      lastError: null,
+      createdAt: now,
+    });
+    await refreshSyncState(db, entity, id);
+  });
+}

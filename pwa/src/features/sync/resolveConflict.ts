@@ -4,9 +4,9 @@ import { captureScope, tableFor, tabletData } from './captureTables';
 import { entriesFor, refreshSyncState } from './syncState';
 
 /**
- * Settles a conflict with the inspector's choice. "mine" sends the local record again as a new
- * change (new changeId) built on the server's version; "server" takes the server's record and
- * drops the local edit. Either way the old conflicting change leaves the outbox.
+ * Settles a conflict with the inspector's choice. "mine" sends the local record (or its delete) again
+ * as a new change (new changeId) built on the server's version; "server" takes the server's record
+ * and drops the local edit or delete. Either way the old conflicting change leaves the outbox.
  */
 export async function resolveConflict(db: SitebandDb, entity: CaptureEntity, id: string, choice: 'mine' | 'server', now = Date.now()): Promise<void> {
   const table = tableFor(db, entity);
@@ -17,17 +17,18 @@ export async function resolveConflict(db: SitebandDb, entity: CaptureEntity, id:
     const entries = await entriesFor(db, entity, id);
     await db.outbox.bulkDelete(entries.map((e) => e.seq!));
     if (choice === 'server') {
-      await table.put({ ...row, data: tabletData(entity, server.data), version: server.version, conflictServer: undefined, editedAt: now });
+      await table.put({ ...row, data: tabletData(entity, server.data), version: server.version, conflictServer: undefined, deletePending: undefined, editedAt: now });
     } else {
       await table.put({ ...row, version: server.version, conflictServer: undefined, editedAt: now });
+      const deleting = row.deletePending === true;
       await db.outbox.add({
         changeId: crypto.randomUUID(),
         entity,
-        op: 'upsert',
+        op: deleting ? 'delete' : 'upsert',
         id,
         // Pending: sent with the record's version, which is now the server's.
         baseVersion: null,
-        data: row.data as Record<string, unknown>,
+        data: deleting ? {} : (row.data as Record<string, unknown>),
         status: 'pending',
         attempts: 0,
         lastError: null,

@@ -53,10 +53,10 @@ export function createTestServer({ rejectIf, maxPushChars = Infinity, maxFileByt
   let failing = 0;
   let erring = { n: 0, status: 500 };
 
-  function write(entity: string, id: string, data: Record<string, unknown>): ServerRecord {
+  function write(entity: string, id: string, data: Record<string, unknown>, deleted = false): ServerRecord {
     const previous = records.get(id)?.record;
     const record: ServerRecord = {
-      entity, id, version: (previous?.version ?? 0) + 1, syncSeq: ++seq, deleted: false,
+      entity, id, version: (previous?.version ?? 0) + 1, syncSeq: ++seq, deleted,
       createdAt: previous?.createdAt ?? '2026-01-01T00:00:00.000Z', updatedAt: '2026-01-01T00:00:00.000Z',
       data: entity === 'case' ? { ...data, inspectorId: 'u-1' } : data,
     };
@@ -73,6 +73,11 @@ export function createTestServer({ rejectIf, maxPushChars = Infinity, maxFileByt
     const reason = rejectIf?.(change);
     if (reason) result = { changeId: change.changeId, status: 'rejected', reason };
     else if ((current?.version ?? null) !== change.baseVersion) result = { changeId: change.changeId, status: 'conflict', reason: 'baseVersion is stale', server: current };
+    else if (change.op === 'delete') {
+      result = current && !current.deleted
+        ? { changeId: change.changeId, status: 'applied', version: write(change.entity, change.id, current.data, true).version }
+        : { changeId: change.changeId, status: 'rejected', reason: `There is no ${change.entity} ${change.id} on the server to delete` };
+    }
     else result = { changeId: change.changeId, status: 'applied', version: write(change.entity, change.id, change.data ?? {}).version };
     outcomes.set(change.changeId, result);
     return result;

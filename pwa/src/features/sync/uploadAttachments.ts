@@ -89,7 +89,7 @@ export const PARALLEL_UPLOADS = 4;
  * thrown once the files in flight have finished.
  */
 export async function uploadAttachments(db: SitebandDb, api: ApiClient, sender: ByteSender): Promise<number> {
-  const waiting = await db.photos.filter((p) => p.version !== null && p.uploadedAt === null && p.bytes !== undefined && p.uploadRefused === undefined).toArray();
+  const waiting = await db.photos.filter((p) => p.version !== null && p.uploadedAt === null && p.bytes !== undefined && p.uploadRefused === undefined && p.deletePending === undefined).toArray();
   const failures: unknown[] = [];
   let next = 0;
   async function worker(): Promise<void> {
