@@ -13,6 +13,7 @@ import review from './en/review.json';
 import lock from './en/lock.json';
 import share from './en/share.json';
 import invite from './en/invite.json';
+import editing from './en/editing.json';
 
 /** Languages with a complete resource file; English is the source language. */
 export const SUPPORTED_LANGUAGES = ['en'] as const;
@@ -28,7 +29,7 @@ function storedLanguage(): Language {
 /** Starts i18next with every bundled resource (no network loading: the app must work offline). */
 export async function initI18n(): Promise<typeof i18next> {
   await i18next.use(initReactI18next).init({
-    resources: { en: { translation: { ...en, identify, library, capture, events, escalations, caseOutcome, audit, review, lock, caseArchive, share, invite } } },
+    resources: { en: { translation: { ...en, identify, library, capture, events, escalations, caseOutcome, audit, review, lock, caseArchive, share, invite, editing } } },
     lng: storedLanguage(),
     fallbackLng: 'en',
     interpolation: { escapeValue: false },

@@ -5,6 +5,7 @@ import { useParams } from 'react-router-dom';
 import { CaseExportButton } from '../components/caseArchive/CaseExportButton';
 import { CaseFacts } from '../components/cases/CaseFacts';
 import { ConflictPanel } from '../components/cases/ConflictPanel';
+import { CasePhotos } from '../components/cases/CasePhotos';
 import { NotesPanel } from '../components/cases/NotesPanel';
 import { SampleList } from '../components/cases/SampleList';
 import { SyncBar } from '../components/cases/SyncBar';
@@ -74,6 +75,11 @@ export default function CasePage() {
           <CaseExportButton caseId={id} />
         </div>
         {row.data.status === 'submitted' && <p className="sb-muted">{t('capture.case.frozen')}</p>}
+        {!open && row.data.status !== 'submitted' && (
+          <p className="sb-muted" data-testid="case-read-only">
+            {t('editing.readOnly', { status: t(`capture.status.${row.data.status}`) })}
+          </p>
+        )}
       </section>
       {outcome && <CaseReviewPanel row={row} outcome={outcome} />}
       {outcome && <CaseEscalationsPanel outcome={outcome} />}
@@ -90,6 +96,7 @@ export default function CasePage() {
           </IonButton>
         )}
       </section>
+      <CasePhotos caseId={id} editable={open} />
       <NotesPanel caseId={id} editable={open} />
       <CautionNote />
     </PageShell>

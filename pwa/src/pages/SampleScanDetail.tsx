@@ -50,6 +50,7 @@ export function SampleScanDetail({ scan, raw, escalations }: { scan: ScanRow; ra
             <SyncBadge state={scan.sync} testId="scan-sync" />
           </dd>
         </dl>
+        <p className="sb-muted">{t('editing.permanent.rawFile')}</p>
         {scan.rejectedReason && (
           <p className="sb-error" role="alert">
             {t('capture.sync.rejected', { reason: scan.rejectedReason })}
@@ -88,6 +89,7 @@ export function SampleScanDetail({ scan, raw, escalations }: { scan: ScanRow; ra
           <p>{e.data.reason}</p>
           <p>{t('capture.scanDetail.hazardClasses', { classes: e.data.hazardClasses.join(', ') })}</p>
           <SyncBadge state={e.sync} />
+          <p className="sb-muted">{t('editing.permanent.escalations')}</p>
         </section>
       ))}
 

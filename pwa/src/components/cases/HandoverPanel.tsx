@@ -42,7 +42,7 @@ export function HandoverPanel({ caseId, sampleId, defaultFrom, editable }: { cas
       <h2 id="custody-heading" className="sb-panel__heading">
         {t('capture.handover.heading')}
       </h2>
-      <p className="sb-muted">{t('capture.handover.appendOnly')}</p>
+      <p className="sb-muted">{t('editing.permanent.handovers')}</p>
       {handovers && handovers.length > 0 && (
         <HandoverTable
           testId="handovers"

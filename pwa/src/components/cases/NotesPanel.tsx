@@ -6,8 +6,7 @@ import { captureDb } from '../../features/cases/captureDb';
 import { addNote } from '../../features/notes/addNote';
 import { useNotes } from '../../features/notes/useNotes';
 import { useSpeechInput } from '../../features/notes/useSpeechInput';
-import { formatDateTime } from '../../i18n/format';
-import { SyncBadge } from './SyncBadge';
+import { NoteItem } from './NoteItem';
 
 /** Timestamped site notes of a case or of one sample: the list, a text box and optional dictation. */
 export function NotesPanel({ caseId, sampleId, editable }: { caseId: string; sampleId?: string; editable: boolean }) {
@@ -39,16 +38,7 @@ export function NotesPanel({ caseId, sampleId, editable }: { caseId: string; sam
       </h2>
       {shown && shown.length === 0 && <p className="sb-muted">{t('capture.notes.none')}</p>}
       <ol className="sb-note-list">
-        {shown?.map((note) => (
-          <li key={note.id} data-testid="site-note">
-            <p className="sb-note-list__meta">
-              <time dateTime={note.data.recordedAt}>{formatDateTime(Date.parse(note.data.recordedAt), i18n.language)}</time>
-              <SyncBadge state={note.sync} />
-            </p>
-            <p>{note.data.text}</p>
-            {note.rejectedReason && <p className="sb-error">{t('capture.sync.rejected', { reason: note.rejectedReason })}</p>}
-          </li>
-        ))}
+        {shown?.map((note) => <NoteItem key={note.id} note={note} editable={editable} />)}
       </ol>
       {editable && (
         <form onSubmit={submit} noValidate>

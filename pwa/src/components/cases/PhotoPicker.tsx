@@ -37,7 +37,7 @@ export function PhotoPicker({ caseId, sampleId, sampleLabel, editable }: { caseI
       {photos && photos.length === 0 && <p className="sb-muted">{t('capture.photos.none')}</p>}
       <div className="sb-photo-grid">
         {photos?.map((photo, index) => (
-          <PhotoThumb key={photo.id} photo={photo} alt={t('capture.photos.alt', { label: sampleLabel, number: index + 1 })} />
+          <PhotoThumb key={photo.id} photo={photo} alt={t('capture.photos.alt', { label: sampleLabel, number: index + 1 })} deletable={editable} />
         ))}
       </div>
       {editable && (

@@ -1,12 +1,20 @@
-import { useEffect, useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
+import { IonButton } from '@ionic/react';
 import { useTranslation } from 'react-i18next';
 import type { PhotoRow } from '../../db/photosTable';
+import { captureDb } from '../../features/cases/captureDb';
+import { recordDelete } from '../../features/sync/recordChange';
+import { ConfirmDelete } from './ConfirmDelete';
 import { SyncBadge } from './SyncBadge';
 
-/** One stored photo as a thumbnail (from the bytes on the tablet) with its sync state. */
-export function PhotoThumb({ photo, alt }: { photo: PhotoRow; alt: string }) {
+/**
+ * One stored photo as a thumbnail (from the bytes on the tablet) with its sync state: a tap opens it
+ * full size; on an open case it can be deleted after asking.
+ */
+export function PhotoThumb({ photo, alt, deletable }: { photo: PhotoRow; alt: string; deletable: boolean }) {
   const { t } = useTranslation();
   const [url, setUrl] = useState<string>();
+  const viewer = useRef<HTMLDialogElement>(null);
   useEffect(() => {
     if (!photo.bytes) return undefined;
     const next = URL.createObjectURL(new Blob([photo.bytes], { type: photo.data.contentType }));
@@ -14,8 +22,22 @@ export function PhotoThumb({ photo, alt }: { photo: PhotoRow; alt: string }) {
     return () => URL.revokeObjectURL(next);
   }, [photo.bytes, photo.data.contentType]);
   return (
-    <figure className="sb-photo" data-testid="photo" data-sha256={photo.data.sha256}>
-      {url ? <img src={url} alt={alt} /> : <div className="sb-photo__missing">{alt}</div>}
+    <figure className="sb-photo" data-testid="photo" data-photo-id={photo.id} data-sha256={photo.data.sha256}>
+      {url ? (
+        <button type="button" className="sb-photo__open" aria-label={t('editing.photos.open', { alt })} onClick={() => viewer.current?.showModal()}>
+          <img src={url} alt={alt} />
+        </button>
+      ) : (
+        <div className="sb-photo__missing">{alt}</div>
+      )}
+      {url && (
+        <dialog ref={viewer} className="sb-photo-viewer" aria-label={alt} data-testid="photo-viewer">
+          <img src={url} alt={alt} />
+          <IonButton className="sb-primary" onClick={() => viewer.current?.close()}>
+            {t('editing.photos.close')}
+          </IonButton>
+        </dialog>
+      )}
       <figcaption>
         <SyncBadge state={photo.sync} />
         {photo.uploadRefused ? (
@@ -23,6 +45,7 @@ export function PhotoThumb({ photo, alt }: { photo: PhotoRow; alt: string }) {
         ) : (
           photo.rejectedReason && <span className="sb-error">{t('capture.sync.rejected', { reason: photo.rejectedReason })}</span>
         )}
+        {deletable && <ConfirmDelete question={t('editing.photos.confirm')} testId="delete-photo" onDelete={() => recordDelete(captureDb(), 'attachment', photo.id)} />}
       </figcaption>
     </figure>
   );

@@ -1,0 +1,184 @@
+// Browser end-to-end test of editing and deleting on an open case offline: the edits and deletes wait on
+// the tablet, survive a reload, and reach the server with the next sync. Registered in run.mjs.
+// The site, sample and notes are an invented demo scenario.
+import assert from 'node:assert/strict';
+import { after, before, describe, it } from 'node:test';
+import { blockingViolations } from './axe.mjs';
+import { openBrowser, screenshot } from './browser.mjs';
+import { gradientPng, readCapture, waitForSynced } from './capture.mjs';
+import { apiToken, goOffline, signInTo, waitForPage } from './shell.mjs';
+
+const SITE = `Riverside solvent store (e2e ${Date.now() % 100000})`;
+
+async function assertAccessible(page, where) {
+  assert.deepEqual(await blockingViolations(page), [], `axe found serious or critical problems on ${where}`);
+}
+
+/** The visible site note holding this text. */
+const noteWith = (page, text) => page.getByTestId('site-note').filter({ visible: true }).filter({ hasText: text });
+
+export function editingTests({ baseUrl, password }) {
+  async function caseOnServer(token, caseId) {
+    const response = await fetch(`${baseUrl}/api/cases/${caseId}`, { headers: { Authorization: `Bearer ${token}` } });
+    assert.equal(response.status, 200);
+    return response.json();
+  }
+
+  describe('editing and deleting on an open case offline', { concurrency: false }, () => {
+    let browser;
+    let token;
+    let caseId;
+    let sampleId;
+    let deletedPhoto;
+    before(async () => {
+      browser = await openBrowser({ origin: baseUrl, width: 800, height: 1280 });
+      token = await apiToken(baseUrl, 'inspector@demo.test', password);
+    });
+    after(async () => {
+      await browser?.close();
+    });
+
+    it('records a case with a sample, two photos and two notes, and syncs them', async () => {
+      const { page } = browser;
+      await signInTo(page, baseUrl, 'inspector@demo.test', password, 'Cases');
+      await page.getByTestId('new-case').filter({ visible: true }).click();
+      await waitForPage(page, 'New case');
+      await page.getByLabel('Site name', { exact: true }).fill(SITE);
+      await page.getByLabel('Address', { exact: true }).fill('Mill Lane 3, Ashbury');
+      await page.getByRole('button', { name: 'Save case' }).filter({ visible: true }).click();
+      await waitForPage(page, SITE);
+      caseId = page.url().split('/').pop();
+      for (const text of ['Three unlabelled cans by the door.', 'Strong draught through the east window.']) {
+        await page.getByLabel('New site note', { exact: true }).filter({ visible: true }).fill(text);
+        await page.getByRole('button', { name: 'Add note' }).filter({ visible: true }).click();
+        await noteWith(page, text).waitFor();
+      }
+      await page.getByTestId('new-sample').filter({ visible: true }).click();
+      await waitForPage(page, 'New sample');
+      await page.getByLabel('Label', { exact: true }).filter({ visible: true }).fill('RS-01');
+      await page.getByLabel('Container', { exact: true }).filter({ visible: true }).fill('Steel can, 5 L');
+      await page.getByRole('button', { name: 'Save sample' }).filter({ visible: true }).click();
+      await waitForPage(page, 'Sample RS-01');
+      sampleId = page.url().split('/').pop();
+      await page.getByTestId('photo-input').filter({ visible: true }).setInputFiles([
+        { name: 'can-front.png', mimeType: 'image/png', buffer: gradientPng(320, 240, 90) },
+        { name: 'can-cap.png', mimeType: 'image/png', buffer: gradientPng(240, 320, 160) },
+      ]);
+      await page.getByTestId('photo').filter({ visible: true }).nth(1).waitFor();
+      await page.goto(`${baseUrl}/tabs/cases/${caseId}`);
+      await waitForPage(page, SITE);
+      await page.getByTestId('sync-now').filter({ visible: true }).click();
+      await waitForSynced(page);
+      const detail = await caseOnServer(token, caseId);
+      assert.deepEqual([detail.samples.length, detail.notes.length, detail.attachments.length], [1, 2, 2]);
+    });
+
+    it('edits the case, the sample and a note offline, deletes a note and a photo after asking, and keeps it all over a reload', async () => {
+      const { page, context } = browser;
+      await goOffline(page, context);
+
+      // The sample's fields.
+      await page.goto(`${baseUrl}/tabs/cases/${caseId}/samples/${sampleId}`);
+      await waitForPage(page, 'Sample RS-01');
+      await page.getByLabel('Container', { exact: true }).filter({ visible: true }).fill('Steel can, 5 L, dented');
+      await page.getByLabel('Location on site', { exact: true }).filter({ visible: true }).fill('Shelf B, floor level');
+      await page.getByRole('button', { name: 'Save sample' }).filter({ visible: true }).click();
+      await page.getByTestId('sample-sync').filter({ visible: true }).filter({ hasText: 'Local only' }).waitFor();
+
+      // The case's fields.
+      await page.goto(`${baseUrl}/tabs/cases/${caseId}`);
+      await waitForPage(page, SITE);
+      await page.locator('ion-button', { hasText: 'Edit visit details' }).filter({ visible: true }).click();
+      await waitForPage(page, 'Edit case');
+      await page.getByLabel('Address', { exact: true }).filter({ visible: true }).fill('Mill Lane 3a, Ashbury');
+      await page.getByLabel('Weather', { exact: true }).filter({ visible: true }).fill('Cold, dry, still air');
+      await page.getByRole('button', { name: 'Save case' }).filter({ visible: true }).click();
+      await waitForPage(page, SITE);
+
+      // A note edited in place.
+      await noteWith(page, 'Three unlabelled cans').getByTestId('edit-note').click();
+      await page.getByLabel('Text of the note', { exact: true }).filter({ visible: true }).fill('Three unlabelled cans by the door, one leaking.');
+      await page.getByRole('button', { name: 'Save note' }).filter({ visible: true }).click();
+      await noteWith(page, 'one leaking').waitFor();
+
+      // A note deleted: asked first, "Keep it" keeps it, "Yes, delete" deletes it.
+      const draught = noteWith(page, 'Strong draught');
+      await draught.getByTestId('delete-note').click();
+      await draught.getByTestId('delete-note-confirm').waitFor();
+      await assertAccessible(page, 'the case page asking before a delete');
+      await screenshot(page, 'editing-confirm-delete-note-800x1280');
+      await draught.getByRole('button', { name: 'Keep it' }).click();
+      await draught.getByTestId('delete-note').waitFor();
+      await draught.getByTestId('delete-note').click();
+      await draught.getByRole('button', { name: 'Yes, delete' }).click();
+      await draught.waitFor({ state: 'detached' });
+
+      // The photos of every sample on the case page: one opens full size, the other is deleted.
+      const photos = page.getByTestId('case-photos').filter({ visible: true });
+      const group = photos.getByTestId('photo-group').filter({ hasText: 'Sample RS-01' });
+      await group.getByTestId('photo').nth(1).waitFor();
+      assert.match(await group.textContent(), /2 photos/);
+      await group.getByRole('button', { name: 'Open Photo 1 of sample RS-01 full size' }).click();
+      const viewer = group.getByTestId('photo-viewer').first();
+      await viewer.waitFor({ state: 'visible' });
+      await assertAccessible(page, 'a photo opened full size');
+      await screenshot(page, 'editing-photo-full-size-800x1280');
+      await viewer.getByRole('button', { name: 'Close' }).click();
+      await viewer.waitFor({ state: 'hidden' });
+      const second = group.getByTestId('photo').nth(1);
+      deletedPhoto = await second.getAttribute('data-photo-id');
+      await second.getByTestId('delete-photo').click();
+      await second.getByRole('button', { name: 'Yes, delete' }).click();
+      await page.locator(`[data-photo-id="${deletedPhoto}"]`).waitFor({ state: 'detached' });
+      assert.match(await group.textContent(), /1 photo(?!s)/);
+      await assertAccessible(page, 'the case page after the deletes');
+      await screenshot(page, 'editing-case-offline-800x1280');
+
+      // Nothing deleted has left the tablet: the records wait, hidden, with their delete changes.
+      const local = await page.evaluate(readCapture);
+      assert.equal(local.photos.find((p) => p.id === deletedPhoto)?.deletePending, true);
+      assert.equal(local.notes.filter((n) => n.caseId === caseId && n.deletePending).length, 1);
+      assert.deepEqual(local.outbox.map((e) => [e.entity, e.op]).sort(), [['attachment', 'delete'], ['case', 'upsert'], ['note', 'delete'], ['note', 'upsert'], ['sample', 'upsert']]);
+
+      await page.reload();
+      await waitForPage(page, SITE);
+      await noteWith(page, 'one leaking').waitFor();
+      assert.equal(await noteWith(page, 'Strong draught').count(), 0);
+      assert.equal(await page.getByTestId('case-photos').filter({ visible: true }).getByTestId('photo').count(), 1);
+      await page.getByText('Mill Lane 3a, Ashbury').filter({ visible: true }).first().waitFor();
+    });
+
+    it('syncs the edits and the deletes: the server has them, and only then do the deleted records leave the tablet', async () => {
+      const { page, context } = browser;
+      await context.setOffline(false);
+      await page.getByTestId('connection-status').filter({ visible: true }).filter({ hasText: 'Online' }).waitFor();
+      await page.getByTestId('sync-now').filter({ visible: true }).click();
+      const local = await waitForSynced(page);
+      assert.equal(local.photos.some((p) => p.id === deletedPhoto), false);
+      assert.equal(local.notes.filter((n) => n.caseId === caseId).length, 1);
+
+      const detail = await caseOnServer(token, caseId);
+      assert.equal(detail.case.address, 'Mill Lane 3a, Ashbury');
+      assert.equal(detail.case.weatherNotes, 'Cold, dry, still air');
+      assert.deepEqual(detail.samples.map((s) => [s.id, s.container, s.locationOnSite]), [[sampleId, 'Steel can, 5 L, dented', 'Shelf B, floor level']]);
+      assert.deepEqual(detail.notes.map((n) => n.text), ['Three unlabelled cans by the door, one leaking.']);
+      assert.deepEqual(detail.attachments.map((a) => a.id).includes(deletedPhoto), false);
+      assert.equal(detail.attachments.length, 1);
+      // The deletions travel to other devices as tombstones.
+      const pulled = await (await fetch(`${baseUrl}/api/sync/pull?cursor=0&limit=1000`, { headers: { Authorization: `Bearer ${token}` } })).json();
+      assert.equal(pulled.changes.find((c) => c.id === deletedPhoto)?.deleted, true);
+    });
+
+    it('makes the case read-only once submitted: no edit or delete is offered', async () => {
+      const { page } = browser;
+      await page.getByTestId('case-submit-toggle').filter({ visible: true }).click();
+      await page.getByTestId('case-submit-toggle').filter({ visible: true }).filter({ hasText: 'Reopen case' }).waitFor();
+      assert.equal(await page.getByTestId('edit-note').filter({ visible: true }).count(), 0);
+      assert.equal(await page.getByTestId('delete-note').filter({ visible: true }).count(), 0);
+      assert.equal(await page.getByTestId('delete-photo').filter({ visible: true }).count(), 0);
+      // Photos still open full size on a read-only case.
+      await page.getByTestId('case-photos').filter({ visible: true }).getByRole('button', { name: /full size/ }).first().waitFor();
+      await assertAccessible(page, 'the submitted case');
+    });
+  });
+}
