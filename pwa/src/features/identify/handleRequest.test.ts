@@ -30,6 +30,36 @@ describe('handleRequest (the worker side of the protocol)', () => {
     expect(strict.outcome.plot.peaksCm1.length).toBeLessThan(loose.outcome.plot.peaksCm1.length);
   });
 
+  it('runs a saved scan again with its recorded processing, tuned settings included', () => {
+    const file = fixtureScan('synthetic-ir-ethanol-liquid.csv');
+    const tuned = handleRequest({ id: 1, kind: 'identify', file, scan: ir, processing: { baselineLambda: 1e5, smoothingWindow: 15, peakThresholdSigma: 3 } });
+    if (!tuned.ok || tuned.kind !== 'identify') throw new Error('the tuned run should succeed');
+    const recorded = JSON.parse(JSON.stringify(tuned.outcome.processed.parameters));
+    const again = handleRequest({ id: 2, kind: 'identify', file, scan: ir, processing: { recorded } });
+    if (!again.ok || again.kind !== 'identify') throw new Error(`the recorded run should succeed, got ${JSON.stringify(again)}`);
+    expect(JSON.parse(JSON.stringify(again.outcome.processed.parameters))).toEqual(recorded);
+    expect(again.outcome.plot.peaksCm1).toEqual(tuned.outcome.plot.peaksCm1);
+    const defaults = handleRequest({ id: 3, kind: 'identify', file, scan: ir, processing: DEFAULT_PROCESSING });
+    if (!defaults.ok || defaults.kind !== 'identify') throw new Error('the default run should succeed');
+    expect(defaults.outcome.processed.parameters.smoothing.windowSize).not.toBe(15);
+  });
+
+  it('refuses a recorded processing it cannot run, naming the setting', () => {
+    const file = fixtureScan('synthetic-ir-ethanol-liquid.csv');
+    const first = handleRequest({ id: 1, kind: 'identify', file, scan: ir, processing: DEFAULT_PROCESSING });
+    if (!first.ok || first.kind !== 'identify') throw new Error('the first run should succeed');
+    const recorded = { ...JSON.parse(JSON.stringify(first.outcome.processed.parameters)), resampling: 'spline' };
+    expect(handleRequest({ id: 2, kind: 'identify', file, scan: ir, processing: { recorded } })).toEqual({
+      id: 2,
+      ok: false,
+      error: { code: 'settings', message: 'unknown setting resampling' },
+    });
+    expect(handleRequest({ id: 3, kind: 'identify', file, scan: { ...ir, phase: 'gas' }, processing: { recorded: first.outcome.processed.parameters } })).toMatchObject({
+      ok: false,
+      error: { code: 'settings', message: 'The recorded processing is for technique ir, phase condensed, but the scan is technique ir, phase gas' },
+    });
+  });
+
   it('answers a malformed file with an import error that says what is wrong', () => {
     const response = handleRequest({ id: 3, kind: 'identify', file: textScan('broken.csv', 'this is not,a spectrum\nat,all\n'), scan: ir, processing: DEFAULT_PROCESSING });
     expect(response).toMatchObject({ id: 3, ok: false, error: { code: 'import' } });

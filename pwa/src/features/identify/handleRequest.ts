@@ -5,6 +5,7 @@
 import {
   identifySpectrum,
   importSpectrum,
+  processOptionsFromRecord,
   referenceStandard,
   runInstrumentCheck,
   SpectrumImportError,
@@ -12,10 +13,11 @@ import {
   type FlaggedPeak,
   type Library,
   type Peak,
+  type ProcessOptions,
   type Spectrum,
 } from '@siteband/shared';
-import type { PlotData, WorkerError, WorkerRequest, WorkerResponse } from './protocol';
-import { toProcessOptions, validateScanSettings } from './scanSettings';
+import type { PlotData, RecordedProcessing, WorkerError, WorkerRequest, WorkerResponse } from './protocol';
+import { DEFAULT_PROCESSING, toProcessOptions, validateScanSettings, type ProcessingSettings, type ScanSettings } from './scanSettings';
 
 function plotData(spectrum: Spectrum, peaks: readonly Peak[], flagged: readonly FlaggedPeak[]): PlotData {
   return {
@@ -31,6 +33,20 @@ export function toWorkerError(error: unknown): WorkerError {
   if (error instanceof SpectrumImportError) return { code: 'import', message: error.message };
   if (error instanceof RangeError || error instanceof TypeError) return { code: 'settings', message: error.message };
   return { code: 'internal', message: error instanceof Error ? error.message : String(error) };
+}
+
+/** The pipeline's options: the screen's settings, or a saved scan's recorded processing as it was. */
+function processOptionsOf(scan: ScanSettings, processing: ProcessingSettings | RecordedProcessing): ProcessOptions {
+  if (!('recorded' in processing)) {
+    validateScanSettings(scan, processing);
+    return toProcessOptions(scan, processing);
+  }
+  validateScanSettings(scan, DEFAULT_PROCESSING);
+  const process = processOptionsFromRecord(processing.recorded);
+  if (process.technique !== scan.technique || process.phase !== scan.phase) {
+    throw new RangeError(`The recorded processing is for technique ${process.technique}, phase ${process.phase}, but the scan is technique ${scan.technique}, phase ${scan.phase}`);
+  }
+  return process;
 }
 
 let kept: Library | undefined;
@@ -54,14 +70,14 @@ export function handleRequest(request: WorkerRequest): WorkerResponse {
         return { id: request.id, ok: true, kind: 'warm-up' };
       case 'identify': {
         const { scan, processing, file } = request;
-        validateScanSettings(scan, processing);
+        const process = processOptionsOf(scan, processing);
         const spectrum = importSpectrum(new Uint8Array(file.bytes), {
           fileName: file.name,
           technique: scan.technique,
           ...(scan.technique === 'raman' ? { excitationNm: scan.excitationNm } : {}),
         });
         const library = libraryFor(request.library);
-        const { processed, result } = identifySpectrum(spectrum, { process: toProcessOptions(scan, processing), ...(library ? { library } : {}) });
+        const { processed, result } = identifySpectrum(spectrum, { process, ...(library ? { library } : {}) });
         return {
           id: request.id,
           ok: true,

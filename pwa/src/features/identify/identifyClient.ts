@@ -1,6 +1,6 @@
 /** The screens' side of the worker protocol: one promise per request, matched by id. */
 import type { InstrumentCheckResult, Library } from '@siteband/shared';
-import type { IdentifyOutcome, PlotData, ScanFile, WorkerError, WorkerRequest, WorkerResponse } from './protocol';
+import type { IdentifyOutcome, PlotData, RecordedProcessing, ScanFile, WorkerError, WorkerRequest, WorkerResponse } from './protocol';
 import type { ProcessingSettings, ScanSettings } from './scanSettings';
 
 /** The part of a Worker the client uses (a real Worker, or the handler in a test). */
@@ -23,7 +23,7 @@ export class IdentifyError extends Error {
 /** Sends requests to the identification worker. */
 export interface IdentifyClient {
   warmUp(): Promise<void>;
-  identify(file: ScanFile, scan: ScanSettings, processing: ProcessingSettings, library?: Library): Promise<IdentifyOutcome>;
+  identify(file: ScanFile, scan: ScanSettings, processing: ProcessingSettings | RecordedProcessing, library?: Library): Promise<IdentifyOutcome>;
   checkInstrument(file: ScanFile, standardId: string, excitationNm?: number): Promise<{ check: InstrumentCheckResult; plot: PlotData }>;
 }
 

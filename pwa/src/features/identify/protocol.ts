@@ -18,13 +18,21 @@ export interface WarmUpRequest {
   readonly kind: 'warm-up';
 }
 
+/**
+ * A saved scan's processing exactly as its result recorded it (`result.processing`), run again
+ * through the shared processOptionsFromRecord, the mapping the server's recomputation uses too.
+ */
+export interface RecordedProcessing {
+  readonly recorded: unknown;
+}
+
 /** Import, process and rank one scan. */
 export interface IdentifyRequest {
   readonly id: number;
   readonly kind: 'identify';
   readonly file: ScanFile;
   readonly scan: ScanSettings;
-  readonly processing: ProcessingSettings;
+  readonly processing: ProcessingSettings | RecordedProcessing;
   /** The library in force as the tablet last received it; absent: the bundled library. */
   readonly library?: Library;
 }

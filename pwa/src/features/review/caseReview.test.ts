@@ -77,7 +77,7 @@ describe('case review', () => {
 
   it('reads a raw scan with its ATR flag, and takes no stored result that lacks the fields the panel needs', () => {
     expect(rawScanInputOf({ id: 'x', version: 1, rawAttachmentId: 'a-1', technique: 'raman', phase: 'condensed', excitationNm: 785, result: {} })).toEqual({
-      rawAttachmentId: 'a-1', technique: 'raman', phase: 'condensed', excitationNm: 785, atr: false,
+      rawAttachmentId: 'a-1', technique: 'raman', phase: 'condensed', excitationNm: 785, atr: false, processing: null,
     });
     expect(rawScanInputOf({ id: 'x', version: 1, rawAttachmentId: 'a-2', technique: 'ir', phase: 'condensed', result: { processing: { atr: { enabled: true } } } })?.atr).toBe(true);
     expect(rawScanInputOf({ id: 'x', version: 1, rawAttachmentId: null })).toBeNull();

@@ -26,13 +26,14 @@ export function storedIdentifyResult(result: unknown): IdentifyResult | null {
 /** How to read a scan's raw file again, or null when it has none on the server. */
 export function rawScanInputOf(scan: FlatRecord): RawScanInput | null {
   if (typeof scan.rawAttachmentId !== 'string' || !scan.rawAttachmentId) return null;
-  const processing = (scan.result as { processing?: { atr?: { enabled?: unknown } } } | null | undefined)?.processing;
+  const processing = (scan.result as { processing?: { atr?: { enabled?: unknown } } | null } | null | undefined)?.processing ?? null;
   return {
     rawAttachmentId: scan.rawAttachmentId,
     technique: scan.technique === 'raman' ? 'raman' : 'ir',
     phase: scan.phase === 'gas' ? 'gas' : 'condensed',
     excitationNm: typeof scan.excitationNm === 'number' ? scan.excitationNm : null,
     atr: processing?.atr?.enabled === true,
+    processing,
   };
 }
 

@@ -39,6 +39,8 @@ export interface RawScanInput {
   excitationNm: number | null;
   /** The scan was taken on a diamond ATR (from the stored result's processing). */
   atr: boolean;
+  /** The stored result's `processing`, run again as recorded; null when the tablet recorded none (the defaults then). */
+  processing: unknown;
 }
 
 /** The scan settings of a saved scan. */
@@ -53,13 +55,15 @@ export function scanSettingsOf(scan: RawScanInput): ScanSettings {
 export function useRawScanOutcome(scan: RawScanInput | null, worker: () => IdentifyClient, library: Library | undefined) {
   const client = useApiClient();
   return useQuery({
-    queryKey: [...reviewKeys.files, 'raw', scan?.rawAttachmentId, scan && scanSettingsOf(scan), library?.version.contentHash] as const,
+    queryKey: [...reviewKeys.files, 'raw', scan?.rawAttachmentId, scan && scanSettingsOf(scan), scan?.processing, library?.version.contentHash] as const,
     enabled: scan !== null,
     staleTime: Infinity,
     queryFn: async ({ signal }): Promise<IdentifyOutcome> => {
       const file = await downloadAttachment(client, scan!.rawAttachmentId, signal);
       const bytes = await file.blob.arrayBuffer();
-      return worker().identify({ name: file.fileName ?? scan!.rawAttachmentId, bytes }, scanSettingsOf(scan!), DEFAULT_PROCESSING, library);
+      // Plotted as the tablet processed it, with the settings the inspector tuned.
+      const processing = scan!.processing === null ? DEFAULT_PROCESSING : { recorded: scan!.processing };
+      return worker().identify({ name: file.fileName ?? scan!.rawAttachmentId, bytes }, scanSettingsOf(scan!), processing, library);
     },
   });
 }
