@@ -1,19 +1,8 @@
 import i18next from 'i18next';
 import { initReactI18next } from 'react-i18next';
 import en from './en.json';
-import identify from './en/identify.json';
-import library from './en/library.json';
-import capture from './en/capture.json';
-import caseArchive from './en/caseArchive.json';
-import events from './en/events.json';
-import escalations from './en/escalations.json';
-import caseOutcome from './en/case-outcome.json';
-import audit from './en/audit.json';
-import review from './en/review.json';
 import lock from './en/lock.json';
-import share from './en/share.json';
 import invite from './en/invite.json';
-import editing from './en/editing.json';
 
 /** Languages with a complete resource file; English is the source language. */
 export const SUPPORTED_LANGUAGES = ['en'] as const;
@@ -26,10 +15,14 @@ function storedLanguage(): Language {
   return SUPPORTED_LANGUAGES.find((lang) => lang === stored) ?? 'en';
 }
 
-/** Starts i18next with every bundled resource (no network loading: the app must work offline). */
+/**
+ * Starts i18next with the bundled strings of the screens drawn before sign-in (sign-in, set
+ * password, idle lock); the signed-in screens add theirs with addSignedInStrings. No network
+ * loading: the app must work offline.
+ */
 export async function initI18n(): Promise<typeof i18next> {
   await i18next.use(initReactI18next).init({
-    resources: { en: { translation: { ...en, identify, library, capture, events, escalations, caseOutcome, audit, review, lock, caseArchive, share, invite, editing } } },
+    resources: { en: { translation: { ...en, lock, invite } } },
     lng: storedLanguage(),
     fallbackLng: 'en',
     interpolation: { escapeValue: false },

@@ -3,6 +3,7 @@ import { IonIcon, IonLabel, IonRouterOutlet, IonTabBar, IonTabButton, IonTabs } 
 import { Navigate, Route } from 'react-router-dom';
 import { useTranslation } from 'react-i18next';
 import { TAB_ICONS } from '../components/tabIcons';
+import { addSignedInStrings } from '../i18n/signedInStrings';
 import { homePathForRole, tabsForRole, type TabId } from '../features/navigation/roleTabs';
 import { useSession } from '../features/session/SessionProvider';
 import { EventsProvider } from '../features/events/EventsProvider';
@@ -30,6 +31,9 @@ import EscalationPage from './EscalationPage';
 import UsersPage from './UsersPage';
 import AuditPage from './AuditPage';
 import AccountPage from './AccountPage';
+
+// This chunk brings the signed-in screens' strings; they are in place before any of them renders.
+addSignedInStrings();
 
 /** The screens of each tab, relative to /tabs; a tab's detail routes sit under its own path. */
 const TAB_ROUTES: Readonly<Record<TabId, readonly { path: string; Page: ComponentType }[]>> = {

@@ -1,6 +1,7 @@
 import { cleanup, fireEvent, render, screen } from '@testing-library/react';
 import { afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { initI18n } from '../../i18n';
+import { addSignedInStrings } from '../../i18n/signedInStrings';
 import { AcknowledgeCautions } from './AcknowledgeCautions';
 
 const noEscalation = { required: false, triggers: [], rulesVersion: 'test' };
@@ -12,6 +13,7 @@ const escalation = {
 
 beforeAll(async () => {
   await initI18n();
+  addSignedInStrings();
 });
 afterEach(cleanup);
 

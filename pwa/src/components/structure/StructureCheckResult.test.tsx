@@ -1,11 +1,13 @@
 import { cleanup, render, screen, within } from '@testing-library/react';
 import { afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { initI18n } from '../../i18n';
+import { addSignedInStrings } from '../../i18n/signedInStrings';
 import { answerStructureRequest } from '../../features/structure/structureProtocol';
 import { StructureCheckResult } from './StructureCheckResult';
 
 beforeAll(async () => {
   await initI18n();
+  addSignedInStrings();
 });
 afterEach(cleanup);
 
