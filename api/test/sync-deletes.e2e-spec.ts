@@ -49,7 +49,7 @@ describe('Sync deletes per entity (e2e, MariaDB)', () => {
     expect(sample).toMatchObject({ status: 'applied', version: 2 });
     // The raw file is permanent and stays; it belongs to the case, which therefore stays too.
     const [keptCase] = await push(t, inspector, [remove('case', ids.case, 1)]);
-    expect(keptCase).toMatchObject({ status: 'rejected', reason: `Case ${ids.case} cannot be deleted while it holds 1 attachments: delete those first (permanent records are never deleted)` });
+    expect(keptCase).toMatchObject({ status: 'rejected', reason: `Case ${ids.case} cannot be deleted while it holds attachments: 1: delete those first (permanent records are never deleted)` });
     const after = await pullAll(t, inspector, cursor);
     expect(after.changes.map((c) => [c.entity, c.id, c.deleted]).sort()).toEqual(
       [['note', ids.caseNote, true], ['note', ids.sampleNote, true], ['attachment', ids.photo, true], ['scan', ids.scan, true], ['sample', ids.sample, true]].sort(),
@@ -68,7 +68,7 @@ describe('Sync deletes per entity (e2e, MariaDB)', () => {
     const [sample] = await push(t, inspector, [remove('sample', ids.sample, 1)]);
     expect(sample).toMatchObject({
       status: 'rejected',
-      reason: `Sample ${ids.sample} cannot be deleted while it holds 1 scans, 1 site notes, 1 photos: delete those first (permanent records are never deleted)`,
+      reason: `Sample ${ids.sample} cannot be deleted while it holds scans: 1, site notes: 1, photos: 1: delete those first (permanent records are never deleted)`,
     });
     expect(await deletedAt('samples', ids.sample)).toBeNull();
   });
@@ -107,15 +107,15 @@ describe('Sync deletes per entity (e2e, MariaDB)', () => {
     expect(made.map((r) => r.status)).toEqual(['applied', 'applied', 'applied']);
     const refused = await push(t, inspector, [remove('handover', handover, 1), remove('instrumentCheck', check, 1), remove('escalation', escalation, 1), remove('attachment', ids.raw, 1), remove('scan', ids.scan, 1)]);
     expect(refused.map((r) => [r.status, r.reason])).toEqual([
-      ['rejected', 'A handover is a permanent record: it cannot be deleted'],
-      ['rejected', 'A instrumentCheck is a permanent record: it cannot be deleted'],
-      ['rejected', 'A escalation is a permanent record: it cannot be deleted'],
+      ['rejected', 'Permanent record (handover): it cannot be deleted'],
+      ['rejected', 'Permanent record (instrumentCheck): it cannot be deleted'],
+      ['rejected', 'Permanent record (escalation): it cannot be deleted'],
       ['rejected', 'A raw scan file is a permanent record: it cannot be deleted'],
-      ['rejected', `Scan ${ids.scan} cannot be deleted while it holds 1 escalations: delete those first (permanent records are never deleted)`],
+      ['rejected', `Scan ${ids.scan} cannot be deleted while it holds escalations: 1: delete those first (permanent records are never deleted)`],
     ]);
     await push(t, inspector, [remove('note', ids.sampleNote, 1), remove('attachment', ids.photo, 1)]);
     const [sample] = await push(t, inspector, [remove('sample', ids.sample, 1)]);
-    expect(sample.reason).toBe(`Sample ${ids.sample} cannot be deleted while it holds 1 hand-overs, 1 scans: delete those first (permanent records are never deleted)`);
+    expect(sample.reason).toBe(`Sample ${ids.sample} cannot be deleted while it holds hand-overs: 1, scans: 1: delete those first (permanent records are never deleted)`);
     for (const [table, id] of [['handovers', handover], ['instrument_checks', check], ['escalations', escalation], ['attachments', ids.raw], ['scans', ids.scan]]) {
       expect(await deletedAt(table, id)).toBeNull();
     }

@@ -162,7 +162,7 @@ export class ChangeApplier {
       // Authorise before anything about the row is revealed.
       const caseId = await handler.authorize(ctx, change.id, null, existing);
       if (change.baseVersion !== existing.version) return conflict(existing);
-      if (handler.appendOnly) throw new ChangeRejected(`A ${change.entity} is a permanent record: it cannot be deleted`);
+      if (handler.appendOnly) throw new ChangeRejected(`Permanent record (${change.entity}): it cannot be deleted`);
       if (existing.deletedAt) throw new ChangeRejected(`This ${change.entity} is already deleted`);
       await handler.checkDelete?.(ctx, existing);
       const before = structuredClone(handler.toData(existing));
@@ -183,7 +183,7 @@ export class ChangeApplier {
     }
     if (change.baseVersion !== existing.version) return conflict(existing);
     if (existing.deletedAt) throw new ChangeRejected(`This ${change.entity} was deleted on the server; it cannot be changed`);
-    if (handler.appendOnly) throw new ChangeRejected(`A ${change.entity} is a permanent record: it cannot be changed once sent`);
+    if (handler.appendOnly) throw new ChangeRejected(`Permanent record (${change.entity}): it cannot be changed once sent`);
     const before = structuredClone(handler.toData(existing));
     await handler.assign(ctx, existing, data.value, { caseId, isNew: false });
     return this.write(ctx, handler, existing, writes, change.changeId, { caseId, action: 'update', before });

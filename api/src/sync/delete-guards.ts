@@ -18,7 +18,7 @@ export async function refuseWhileReferenced(manager: EntityManager, what: string
   const found: string[] = [];
   for (const dependent of dependents) {
     const count = await manager.countBy(dependent.target, { ...dependent.where, deletedAt: IsNull() } as FindOptionsWhere<SyncedRecord>);
-    if (count > 0) found.push(`${count} ${dependent.label}`);
+    if (count > 0) found.push(`${dependent.label}: ${count}`);
   }
   if (found.length > 0) throw new ChangeRejected(`${what} cannot be deleted while it holds ${found.join(', ')}: delete those first (permanent records are never deleted)`);
 }

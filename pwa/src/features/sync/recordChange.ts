@@ -76,7 +76,7 @@ const PERMANENT: ReadonlySet<CaptureEntity> = new Set(['handover', 'instrumentCh
 /** Thrown for a delete the tablet refuses before anything is written (a permanent record, a raw scan file). */
 export class PermanentRecordError extends Error {
   constructor(entity: CaptureEntity) {
-    super(`A ${entity === 'attachment' ? 'raw scan file' : entity} is a permanent record: it is never deleted`);
+    super(`Permanent record (${entity === 'attachment' ? 'raw scan file' : entity}): it is never deleted`);
     this.name = 'PermanentRecordError';
   }
 }
