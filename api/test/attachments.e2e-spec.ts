@@ -1,8 +1,9 @@
 import { randomBytes, randomUUID } from 'node:crypto';
 import { request as httpRequest } from 'node:http';
 import type { AddressInfo } from 'node:net';
+import { PHOTO_CAPTION_MAX_LENGTH } from '@siteband/shared';
 import { PHOTO_MAX_BYTES, RAW_SCAN_MAX_BYTES } from '../src/attachments/attachment-limits';
-import { demo, push, sha256, upsert, uploadWhole } from './support/field-records';
+import { demo, pullAll, push, sha256, upsert, uploadWhole } from './support/field-records';
 import { startS3Fake, type S3Fake } from './support/s3-fake';
 import { DEMO, expectErrorShape, signIn, startTestApp, type TestApp } from './support/test-app';
 
@@ -181,5 +182,65 @@ describe('Attachment uploads (e2e, MariaDB + S3 fake)', () => {
     }
     await status(randomUUID()).expect(404);
     await t.http().get('/api/attachments/not-a-uuid/status').set('Authorization', `Bearer ${inspector}`).expect(400);
+  });
+
+  describe('captions', () => {
+    const stored = async (id: string) => (await t.dataSource.query('SELECT caption, uploadedAt, receivedBytes, version FROM attachments WHERE id = ?', [id]))[0];
+
+    it('refuses a caption over the limit with the reason, and keeps the rest of the batch', async () => {
+      const bytes = randomBytes(2000);
+      const tooLong = randomUUID();
+      const fine = randomUUID();
+      const results = await push(t, inspector, [
+        upsert('attachment', tooLong, demo.photo('sample', sampleId, bytes, { caption: 'x'.repeat(PHOTO_CAPTION_MAX_LENGTH + 1) })),
+        upsert('attachment', fine, demo.photo('sample', sampleId, bytes, { caption: 'ü'.repeat(PHOTO_CAPTION_MAX_LENGTH) })),
+        upsert('attachment', randomUUID(), demo.photo('sample', sampleId, bytes, { caption: 42 })),
+      ]);
+      expect(results.map((r) => r.status)).toEqual(['rejected', 'applied', 'rejected']);
+      expect(results[0].reason).toContain(`caption must be at most ${PHOTO_CAPTION_MAX_LENGTH} characters; this one has ${PHOTO_CAPTION_MAX_LENGTH + 1}`);
+      expect(results[2].reason).toContain('caption must be text');
+      expect(await stored(tooLong)).toBeUndefined();
+      expect((await stored(fine)).caption).toBe('ü'.repeat(PHOTO_CAPTION_MAX_LENGTH));
+    });
+
+    it('takes no caption on a raw scan file', async () => {
+      const raw = Buffer.from('x,y\n1000,0.1\n1001,0.2\n');
+      const [result] = await push(t, inspector, [
+        upsert('attachment', randomUUID(), { ...demo.photo('scan', scanId, raw), kind: 'raw-scan', contentType: 'text/csv', fileName: 'scan.csv', caption: 'Spectrum of the drum' }),
+      ]);
+      expect(result).toMatchObject({ status: 'rejected', reason: 'Only photos take a caption; a raw scan file has none' });
+    });
+
+    it('edits the caption of an uploaded photo without touching its bytes, and pulls it to every reader', async () => {
+      const bytes = randomBytes(5000);
+      const id = randomUUID();
+      const data = demo.photo('sample', sampleId, bytes, { fileName: 'drum-label.jpg' });
+      const [created] = await push(t, inspector, [upsert('attachment', id, data)]);
+      expect(created.status).toBe('applied');
+      await uploadWhole(t, inspector, id, bytes, 'image/jpeg').expect(200);
+      const before = await stored(id);
+      expect(before.caption).toBeNull();
+
+      const [edited] = await push(t, inspector, [upsert('attachment', id, { ...data, caption: '  Drum label, north wall: UN 1942 \n' }, before.version)]);
+      expect(edited.status).toBe('applied');
+      const after = await stored(id);
+      expect(after.caption).toBe('Drum label, north wall: UN 1942');
+      expect(after.uploadedAt).toEqual(before.uploadedAt);
+      expect(after.receivedBytes).toBe(bytes.length);
+      const status = await t.http().get(`/api/attachments/${id}/status`).set('Authorization', `Bearer ${inspector}`).expect(200);
+      expect(status.body.complete).toBe(true);
+
+      for (const token of [inspector, supervisor]) {
+        const pulled = (await pullAll(t, token)).changes.find((c) => c.id === id);
+        expect(pulled).toMatchObject({ version: after.version, data: { caption: 'Drum label, north wall: UN 1942', uploadedAt: expect.any(String) } });
+      }
+
+      // Clearing it (an empty caption) leaves none.
+      const [cleared] = await push(t, inspector, [upsert('attachment', id, { ...data, caption: '   ' }, after.version)]);
+      expect(cleared.status).toBe('applied');
+      expect((await stored(id)).caption).toBeNull();
+      const bundle = await t.http().get(`/api/review/cases/${caseId}`).set('Authorization', `Bearer ${supervisor}`).expect(200);
+      expect(bundle.body.attachments.find((a: { id: string }) => a.id === id)).toMatchObject({ caption: null, fileName: 'drum-label.jpg' });
+    });
   });
 });

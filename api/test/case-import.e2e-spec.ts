@@ -103,6 +103,20 @@ describe('Case archive import (e2e, MariaDB + S3 fake)', () => {
     expect(JSON.stringify(detail.body)).toContain(ids.escalation);
   });
 
+  it('carries photo captions, and imports archives made before captions with none', async () => {
+    const captioned = fieldDay(inspector.user);
+    const photo = captioned.input.records.find((r) => r.id === captioned.ids.photo)!;
+    photo.data = { ...photo.data, caption: 'Split sack, bay 3' };
+    await send(await buildCaseArchive(captioned.input)).expect(200);
+    // fieldDay's own photo record has no caption field, as every archive written before captions.
+    const old = fieldDay(inspector.user);
+    expect(Object.keys(old.input.records.find((r) => r.id === old.ids.photo)!.data)).not.toContain('caption');
+    await send(await buildCaseArchive(old.input)).expect(200);
+    const caption = async (id: string) => (await t.dataSource.query('SELECT caption FROM attachments WHERE id = ?', [id]))[0].caption;
+    expect(await caption(captioned.ids.photo)).toBe('Split sack, bay 3');
+    expect(await caption(old.ids.photo)).toBeNull();
+  });
+
   it('applies a record under the tablet’s own changeId, so the tablet’s later sync of it is a duplicate', async () => {
     const { ids, input } = fieldDay(inspector.user);
     const caseChange = randomUUID();

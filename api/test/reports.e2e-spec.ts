@@ -192,8 +192,9 @@ describe('Scan export and case report (e2e, MariaDB + S3 fake)', () => {
         upsert('sample', reportSample, demo.sample(reportCase, { label: 'S-07', sealNumber: 'PA-000977' })),
         upsert('handover', handover, demo.handover(reportSample)),
         upsert('note', randomUUID(), demo.note(reportCase)),
+        upsert('attachment', randomUUID(), demo.photo('sample', reportSample, Buffer.from('invented photo bytes'), { fileName: 'seal-close-up.jpg', caption: 'Seal PA-000977 intact before transport' })),
       ]);
-      expect(results.map((r) => r.status)).toEqual(['applied', 'applied', 'applied', 'applied']);
+      expect(results.map((r) => r.status)).toEqual(['applied', 'applied', 'applied', 'applied', 'applied']);
       scanId = await scanWithRaw({ name: RAMAN_FIXTURE, bytes: fixture(RAMAN_FIXTURE), technique: 'raman', sample: reportSample, result: tabletResult(RAMAN_FIXTURE, 'raman', 785) });
       const more = await push(t, inspector, [
         upsert('escalation', randomUUID(), { caseId: reportCase, scanId, raisedAt: '2026-11-30T09:00:00.000Z', reason: 'Likely oxidiser stored beside diesel drums', hazardClasses: ['oxidising-solid'] }),
@@ -220,6 +221,7 @@ describe('Scan export and case report (e2e, MariaDB + S3 fake)', () => {
         serverResult.candidates[0].name, 'Explained peaks', 'Missing bands', 'Evidence against',
         'Identification is presumptive', 'Confirm by laboratory analysis', RAMAN_LASER_CAUTION.slice(0, 60),
         'Likely oxidiser stored beside diesel drums', 'Not signed off: the case is submitted.', 'audit entries verified intact',
+        'Photos File Caption seal-close-up.jpg Seal PA-000977 intact before transport',
       ]) {
         expect({ value, found: text.includes(value) }).toEqual({ value, found: true });
       }

@@ -1,6 +1,7 @@
 /** Siteband's offline computation: pure TypeScript, shared by the PWA and the API. */
 export * from './roles.js';
 export * from './password-policy.js';
+export * from './photo-caption.js';
 export * from './symmetry/index.js';
 export * from './spectrum/index.js';
 export * from './instrument-check/index.js';

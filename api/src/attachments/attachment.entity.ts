@@ -1,3 +1,4 @@
+import { PHOTO_CAPTION_MAX_LENGTH } from '@siteband/shared';
 import { Column, Entity, Index, JoinColumn, ManyToOne } from 'typeorm';
 import { Case } from '../cases/case.entity';
 import { SyncedRecord } from '../sync/synced-record';
@@ -38,6 +39,10 @@ export class Attachment extends SyncedRecord {
 
   @Column({ type: 'varchar', length: 100 })
   contentType: string;
+
+  /** What a photo shows, in the inspector's words; null when none was written (raw scan files have none). */
+  @Column({ type: 'varchar', length: PHOTO_CAPTION_MAX_LENGTH, nullable: true })
+  caption: string | null;
 
   /** Declared size in bytes. */
   @Column({ type: 'int' })

@@ -1,3 +1,4 @@
+import { photoCaptionOf, photoCaptionProblem } from '@siteband/shared';
 import { writableCase } from '../cases/case-access';
 import { writableSample } from '../samples/sample-parent';
 import { Scan } from '../scans/scan.entity';
@@ -47,6 +48,7 @@ export const attachmentSyncHandler: SyncHandler<Attachment, AttachmentDataDto> =
     row.contentType = mediaType(data.contentType);
     row.size = data.size;
     row.sha256 = data.sha256;
+    row.caption = photoCaptionOf(data.caption);
   },
 
   toData: (row) => ({
@@ -58,16 +60,19 @@ export const attachmentSyncHandler: SyncHandler<Attachment, AttachmentDataDto> =
     contentType: row.contentType,
     size: row.size,
     sha256: row.sha256,
+    caption: row.caption,
     receivedBytes: row.receivedBytes,
     uploadedAt: row.uploadedAt?.toISOString() ?? null,
   }),
 };
 
-/** Kind, type and size within the limits; and no change of the file itself once bytes have arrived. */
+/** Kind, type, size and caption within the limits; and no change of the file itself once bytes have arrived. */
 function checkFile(data: AttachmentDataDto, existing: Attachment | null): void {
-  const problem = contentTypeProblem(data.kind, data.contentType) ?? sizeProblem(data.kind, data.size);
+  const caption = photoCaptionOf(data.caption);
+  const problem = contentTypeProblem(data.kind, data.contentType) ?? sizeProblem(data.kind, data.size) ?? photoCaptionProblem(caption);
   if (problem) throw new ChangeRejected(problem);
   if (data.kind === 'raw-scan' && data.ownerType !== 'scan') throw new ChangeRejected('A raw-scan attachment must belong to a scan');
+  if (data.kind === 'raw-scan' && caption !== null) throw new ChangeRejected('Only photos take a caption; a raw scan file has none');
   const started = existing && (existing.receivedBytes > 0 || existing.uploadedAt !== null);
   if (
     started &&

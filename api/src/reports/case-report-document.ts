@@ -15,6 +15,8 @@ export interface CaseReportData {
   samples: (FlatRecord & { handovers?: FlatRecord[] })[];
   instrumentChecks: FlatRecord[];
   notes: FlatRecord[];
+  /** The case's live photos (attachments of kind photo), with their captions. */
+  photos: FlatRecord[];
   /** Each scan with its plot from the raw file, or why there is none. */
   scans: { record: FlatRecord; plot: PlotInput | null; plotNote: string | null }[];
   escalations: FlatRecord[];
@@ -143,9 +145,21 @@ function samplesSection(data: CaseReportData): Content[] {
       ]),
       { text: 'Chain of custody', bold: true, margin: [0, 0, 0, 2] },
       grid(['At', 'From', 'To', 'Seal', 'Note'], (sample.handovers ?? []).map((h) => [when(h.at), text(h.from), text(h.to), text(h.sealNumber), text(h.note)])),
+      ...photoList(data.photos.filter((photo) => photo.ownerId === sample.id)),
     );
   }
+  const ofCase = data.photos.filter((photo) => photo.ownerType === 'case');
+  if (ofCase.length > 0) out.push({ text: 'Photos of the site', style: 'h2' }, ...photoList(ofCase));
   return out;
+}
+
+/** Photos as a list: file name and caption (the bytes stay in object storage). */
+function photoList(photos: FlatRecord[]): Content[] {
+  if (photos.length === 0) return [];
+  return [
+    { text: 'Photos', bold: true, margin: [0, 0, 0, 2] },
+    grid(['File', 'Caption'], photos.map((photo) => [text(photo.fileName), text(photo.caption)]), [140, '*']),
+  ];
 }
 
 function scansSection(data: CaseReportData): Content[] {

@@ -37,6 +37,7 @@ export class CaseReportService {
       samples: bundle.samples,
       instrumentChecks: bundle.instrumentChecks,
       notes: bundle.notes,
+      photos: bundle.attachments.filter((attachment) => attachment.kind === 'photo'),
       scans,
       escalations: bundle.escalations,
       decisions: bundle.decisions,

@@ -1,4 +1,4 @@
-import { IsIn, IsInt, IsString, IsUUID, Length, Matches, Min } from 'class-validator';
+import { IsIn, IsInt, IsOptional, IsString, IsUUID, Length, Matches, Min } from 'class-validator';
 import { ATTACHMENT_KINDS, type AttachmentKind } from '../attachment-limits';
 import { ATTACHMENT_OWNER_TYPES, type AttachmentOwnerType } from '../attachment.entity';
 
@@ -29,4 +29,9 @@ export class AttachmentDataDto {
 
   @Matches(/^[0-9a-f]{64}$/, { message: 'sha256 must be the lower-case hex SHA-256 of the file (64 characters)' })
   sha256: string;
+
+  /** What a photo shows (at most PHOTO_CAPTION_MAX_LENGTH characters, checked with the file's limits); absent or null for none. */
+  @IsOptional()
+  @IsString({ message: 'caption must be text' })
+  caption?: string | null;
 }

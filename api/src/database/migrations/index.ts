@@ -6,6 +6,7 @@ import { CreateReviewDecisions1796260000000 } from './1796260000000-CreateReview
 import { AddEscalationWorkflowAndMail1796270000000 } from './1796270000000-AddEscalationWorkflowAndMail';
 import { AddUserInvitations1796270000001 } from './1796270000001-AddUserInvitations';
 import { CreateAuditLog1796280000000 } from './1796280000000-CreateAuditLog';
+import { AddPhotoCaptions1796290000100 } from './1796290000100-AddPhotoCaptions';
 
 /** Every committed migration, oldest first (listed, not globbed, so sources and dist behave the same). */
 export const MIGRATIONS = [
@@ -17,4 +18,5 @@ export const MIGRATIONS = [
   AddEscalationWorkflowAndMail1796270000000,
   AddUserInvitations1796270000001,
   CreateAuditLog1796280000000,
+  AddPhotoCaptions1796290000100,
 ];
