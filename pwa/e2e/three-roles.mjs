@@ -137,6 +137,11 @@ export function threeRoleTests({ baseUrl, password }) {
       await page.getByTestId('site-note').filter({ hasText: 'SB-009913' }).waitFor();
       await page.getByTestId('case-submit-toggle').filter({ visible: true }).filter({ hasText: 'Submit case' }).click();
       await syncNow(page);
+      // The acceptance before the return is history on the tablet too, read by the server's rule.
+      const decided = page.getByTestId(`scan-decision-${scanId}`).filter({ visible: true });
+      await decided.getByTestId('decision-earlier').waitFor();
+      assert.match(await decided.textContent(), /Accepted Ammonium nitrate/);
+      await assertAccessible(page, 'the resubmitted case with an earlier decision, inspector');
     });
 
     it('the supervisor signs the case off and the case report holds every section', async () => {
@@ -173,6 +178,9 @@ export function threeRoleTests({ baseUrl, password }) {
       const { page: tablet } = inspector;
       await syncNow(tablet);
       await tablet.getByTestId('case-accepted').filter({ visible: true }).waitFor();
+      const fresh = tablet.getByTestId(`scan-decision-${scanId}`).filter({ visible: true });
+      await fresh.locator('[data-testid="decision-line"]:not([data-earlier])').filter({ hasText: 'Accepted Ammonium nitrate' }).waitFor();
+      assert.equal(await fresh.getByTestId('decision-earlier').count(), 0, 'the fresh acceptance is current, nothing earlier is shown for the scan');
     });
   });
 }

@@ -16,3 +16,4 @@ export * from './symmetry/detect/index.js';
 export * from './case-archive/index.js';
 export * from './table/index.js';
 export * from './retry/index.js';
+export * from './review/index.js';

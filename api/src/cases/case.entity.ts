@@ -1,10 +1,7 @@
+import { CASE_STATUSES, type CaseStatus } from '@siteband/shared';
 import { Column, Entity, Index, JoinColumn, ManyToOne } from 'typeorm';
 import { User } from '../users/user.entity';
 import { SyncedRecord } from '../sync/synced-record';
-
-/** Case statuses, in workflow order. The inspector moves open ↔ submitted; review states come from supervisors. */
-export const CASE_STATUSES = ['open', 'submitted', 'in_review', 'accepted', 'returned'] as const;
-export type CaseStatus = (typeof CASE_STATUSES)[number];
 
 /** A site visit: where, when, under what conditions, by which inspector. Samples, scans and notes hang below it. */
 @Entity({ name: 'cases' })

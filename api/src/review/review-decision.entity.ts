@@ -1,22 +1,8 @@
+import { DECISION_KINDS, type DecisionKind } from '@siteband/shared';
 import { Column, Entity, Index, JoinColumn, ManyToOne } from 'typeorm';
 import { Case } from '../cases/case.entity';
 import { SyncedRecord } from '../sync/synced-record';
 import { User } from '../users/user.entity';
-
-/**
- * What a supervisor can decide. On a scan: `accept` (the first likely compound stands), `replace` (another
- * library compound, with a reason), `needs_lab` (needs laboratory confirmation). On the case: `return`
- * (back to the inspector with a comment), `sign_off` (accepted), `reopen` (accepted → in review, with a reason).
- */
-export const DECISION_KINDS = ['accept', 'replace', 'needs_lab', 'return', 'sign_off', 'reopen'] as const;
-export type DecisionKind = (typeof DECISION_KINDS)[number];
-
-/** The decisions that concern one scan (the others concern the whole case). */
-export const SCAN_DECISION_KINDS = ['accept', 'replace', 'needs_lab'] as const satisfies readonly DecisionKind[];
-
-export function isScanDecision(kind: DecisionKind): kind is (typeof SCAN_DECISION_KINDS)[number] {
-  return (SCAN_DECISION_KINDS as readonly string[]).includes(kind);
-}
 
 /**
  * One review decision. Append-only: a later decision on the same scan (or case) is a new row with the

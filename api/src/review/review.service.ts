@@ -1,9 +1,10 @@
 import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { randomUUID } from 'node:crypto';
+import { decisionsInForce, isScanDecision, type CaseStatus, type DecisionKind } from '@siteband/shared';
 import { DataSource, IsNull, type EntityManager } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import type { AuthenticatedUser } from '../auth/authenticated-user';
-import { Case, type CaseStatus } from '../cases/case.entity';
+import { Case } from '../cases/case.entity';
 import { caseSyncHandler } from '../cases/case.sync-handler';
 import { CasesService } from '../cases/cases.service';
 import type { FlatRecord } from '../cases/dto/case-list.dto';
@@ -15,8 +16,7 @@ import { lockSyncCounter, takeSyncSeq } from '../sync/sync-sequence';
 import type { DecisionRequestDto } from './dto/decision-request.dto';
 import type { DecisionDto, DecisionResultDto } from './dto/decision.dto';
 import type { CaseBundleDto } from './dto/case-bundle.dto';
-import { decisionsInForce } from './decisions-in-force';
-import { isScanDecision, ReviewDecision, type DecisionKind } from './review-decision.entity';
+import { ReviewDecision } from './review-decision.entity';
 import { decisionPull } from './review-decision.pull';
 
 /**

@@ -1,6 +1,5 @@
+import type { CaseStatus } from '@siteband/shared';
 import type { CaptureRow } from './captureRecord';
-
-export type CaseStatus = 'open' | 'submitted' | 'in_review' | 'accepted' | 'returned';
 
 /** A case's fields as the tablet sends them (PROTOCOL.md, entity `case`). */
 export interface CaseData {

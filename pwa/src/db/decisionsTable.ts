@@ -1,22 +1,7 @@
-/** The kinds of review decision (CONTRACT: supervisor's decisions; `return`, `sign_off`, `reopen` are about the whole case). */
-export type DecisionKind = 'accept' | 'replace' | 'needs_lab' | 'return' | 'sign_off' | 'reopen';
+import type { Decision } from '../features/review/types';
 
-/** One review decision as pulled (entity `decision`, written by supervisors, never pushed): append-only, numbered per case. */
-export interface DecisionRow {
-  id: string;
-  caseId: string;
-  /** Null for a decision about the whole case. */
-  scanId: string | null;
-  kind: DecisionKind;
-  compoundId: string | null;
-  compoundName: string | null;
-  reason: string | null;
-  comment: string | null;
-  /** 1, 2, 3… per case; the current decision of a scan is its highest revision. */
-  revision: number;
-  decidedBy: string;
-  decidedByName: string;
-  decidedAt: string;
+/** One review decision as pulled (entity `decision`, written by supervisors, never pushed), with the server's row version. */
+export interface DecisionRow extends Decision {
   version: number;
 }
 

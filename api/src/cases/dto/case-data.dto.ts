@@ -1,5 +1,5 @@
 import { IsBoolean, IsIn, IsISO8601, IsNumber, IsOptional, IsString, Length, Max, MaxLength, Min, ValidateIf } from 'class-validator';
-import type { CaseStatus } from '../case.entity';
+import type { CaseStatus } from '@siteband/shared';
 
 /** The statuses an inspector may set through sync. */
 export const INSPECTOR_CASE_STATUSES = ['open', 'submitted'] as const satisfies readonly CaseStatus[];

@@ -1,6 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsIn, IsInt, IsString, IsUUID, Length, Min, ValidateIf } from 'class-validator';
-import { DECISION_KINDS, isScanDecision, type DecisionKind } from '../review-decision.entity';
+import { DECISION_KINDS, isScanDecision, type DecisionKind } from '@siteband/shared';
 
 export const MAX_DECISION_TEXT = 2000;
 

@@ -1,6 +1,5 @@
 import { ApiProperty } from '@nestjs/swagger';
-import { CASE_STATUSES, type CaseStatus } from '../../cases/case.entity';
-import { DECISION_KINDS, type DecisionKind } from '../review-decision.entity';
+import { CASE_STATUSES, DECISION_KINDS, type CaseStatus, type DecisionKind } from '@siteband/shared';
 
 /** One review decision, as the review screens see it (the same fields tablets pull as `decision`). */
 export class DecisionDto {

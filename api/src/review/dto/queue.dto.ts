@@ -2,7 +2,7 @@ import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { HAZARD_RANK_LABELS, MAX_HAZARD_RANK, type HazardRank, type HazardRankLabel } from '@siteband/shared';
 import { Transform, Type } from 'class-transformer';
 import { ArrayNotEmpty, IsIn, IsInt, IsISO8601, IsOptional, IsString, IsUUID, Length, Max, Min } from 'class-validator';
-import { CASE_STATUSES, type CaseStatus } from '../../cases/case.entity';
+import { CASE_STATUSES, type CaseStatus } from '@siteband/shared';
 import { PageQuery, type PageLimits } from '../../common/page-query';
 
 /** Review queue pages: 25 cases unless asked, at most 100. */

@@ -1,9 +1,10 @@
 import { useId } from 'react';
+import { CASE_STATUSES } from '@siteband/shared';
 import { useTranslation } from 'react-i18next';
 import type { CaseFilter } from '../../features/cases/filterCases';
 import { Field } from './Field';
 
-const STATUSES = ['all', 'open', 'submitted', 'in_review', 'accepted', 'returned'] as const;
+const STATUSES = ['all', ...CASE_STATUSES] as const;
 
 /** Search by site or address, filter by status and by visit day. */
 export function CaseFilters({ value, onChange }: { value: CaseFilter; onChange: (next: CaseFilter) => void }) {

@@ -1,40 +1,28 @@
 import { useTranslation } from 'react-i18next';
 import type { CaseRow } from '../../db/casesTable';
-import type { DecisionRow } from '../../db/decisionsTable';
 import type { CaseOutcome } from '../../features/cases/useCaseOutcome';
 import { formatDateTime } from '../../i18n/format';
+import { DecisionLine } from '../review/DecisionLine';
 import './outcome.css';
-
-/** One decision in words: what was decided, with its reason or comment. */
-function DecisionText({ decision }: { decision: DecisionRow }) {
-  const { t } = useTranslation();
-  const what =
-    decision.kind === 'replace'
-      ? t('caseOutcome.kind.replace', { compound: decision.compoundName ?? decision.compoundId ?? '' })
-      : t(`caseOutcome.kind.${decision.kind}`);
-  const why = decision.reason ?? decision.comment;
-  return (
-    <>
-      <strong>{what}</strong>
-      {why && <>: {why}</>}
-    </>
-  );
-}
 
 /**
  * The supervisor's review as the tablet last pulled it: a returned case's comment up front, who signed off
- * an accepted one, and the current decision of each scan. Works offline.
+ * an accepted one, and the current decision of each scan, or, for a scan not decided again since the case
+ * was resubmitted, its earlier decision marked as history. Works offline.
  */
 export function CaseReviewPanel({ row, outcome }: { row: CaseRow; outcome: CaseOutcome }) {
   const { t, i18n } = useTranslation();
   const when = (iso: string) => formatDateTime(Date.parse(iso), i18n.language);
   const { status } = row.data;
-  const { caseDecision, byScan } = outcome.review;
+  const { caseDecision, byScan, earlierByScan } = outcome.review;
   const sampleLabel = new Map(outcome.samples.map((s) => [s.id, s.data.label]));
   const scanDecisions = outcome.scans
-    .filter((scan) => byScan.has(scan.id))
+    .filter((scan) => byScan.has(scan.id) || earlierByScan.has(scan.id))
     .sort((a, b) => a.data.recordedAt.localeCompare(b.data.recordedAt))
-    .map((scan) => ({ scan, decision: byScan.get(scan.id)! }));
+    .map((scan) => {
+      const current = byScan.get(scan.id);
+      return current ? { scan, decision: current, earlier: false } : { scan, decision: earlierByScan.get(scan.id)!, earlier: true };
+    });
   if (status === 'open' && !caseDecision && scanDecisions.length === 0) return null;
   if (status === 'submitted' && scanDecisions.length === 0) return null;
 
@@ -69,7 +57,7 @@ export function CaseReviewPanel({ row, outcome }: { row: CaseRow; outcome: CaseO
         <>
           <h3>{t('caseOutcome.scansHeading')}</h3>
           <ul className="sb-decisions" data-testid="scan-decisions">
-            {scanDecisions.map(({ scan, decision }) => (
+            {scanDecisions.map(({ scan, decision, earlier }) => (
               <li key={scan.id} data-testid={`scan-decision-${scan.id}`}>
                 <p>
                   {t('caseOutcome.scanLabel', {
@@ -78,10 +66,8 @@ export function CaseReviewPanel({ row, outcome }: { row: CaseRow; outcome: CaseO
                     when: when(scan.data.recordedAt),
                   })}
                 </p>
-                <p>
-                  <DecisionText decision={decision} />
-                </p>
-                <p className="sb-muted">{t('caseOutcome.decidedBy', { who: decision.decidedByName, when: when(decision.decidedAt), revision: decision.revision })}</p>
+                {earlier && <p className="sb-muted">{t('caseOutcome.noFreshDecision')}</p>}
+                <DecisionLine decision={{ ...decision, earlier }} />
               </li>
             ))}
           </ul>

@@ -1,6 +1,7 @@
 import { useTranslation } from 'react-i18next';
 import type { BundleDecision, Decision } from '../../features/review/types';
 import { formatDateTime } from '../../i18n/format';
+import './decision-line.css';
 
 /** One decision in words: what, by whom, when, with its reason or comment; one made on an earlier submission says so. */
 export function DecisionLine({ decision }: { decision: Decision | BundleDecision }) {

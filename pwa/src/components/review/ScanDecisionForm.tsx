@@ -1,10 +1,10 @@
 import { useId, useState, type FormEvent } from 'react';
 import { IonButton, IonRouterLink } from '@ionic/react';
 import { useTranslation } from 'react-i18next';
-import type { Compound } from '@siteband/shared';
+import { SCAN_DECISION_KINDS, type Compound, type ScanDecisionKind } from '@siteband/shared';
 import { Field } from '../cases/Field';
 import { libraryPaths } from '../../features/library/libraryPaths';
-import { SCAN_DECISION_KINDS, type DecisionInput, type ScanDecisionKind } from '../../features/review/types';
+import type { DecisionInput } from '../../features/review/types';
 
 export interface ScanDecisionFormProps {
   scanId: string;

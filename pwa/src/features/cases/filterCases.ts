@@ -1,4 +1,4 @@
-import type { CaseStatus } from '../../db/casesTable';
+import type { CaseStatus } from '@siteband/shared';
 import type { CaseListItem } from './useCases';
 
 /** The list's filters: free text, a status, and a day range (ISO dates, inclusive; empty = open-ended). */

@@ -1,6 +1,6 @@
 /** What the case review page reads from a case bundle, and which decisions the case's status allows. */
 import type { IdentifyResult } from '@siteband/shared';
-import type { CaseStatus } from '../../db/casesTable';
+import type { CaseStatus } from '@siteband/shared';
 import type { RawScanInput } from './useReview';
 import type { BundleDecision, CaseBundle, Decision, FlatRecord } from './types';
 

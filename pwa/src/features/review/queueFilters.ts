@@ -2,7 +2,7 @@
  * The review queue's filters, sort and page, kept in the page's URL query so a link restores them.
  * The same names go to GET /api/review/queue; this is the one place that reads and writes them.
  */
-import type { CaseStatus } from '../../db/casesTable';
+import type { CaseStatus } from '@siteband/shared';
 import type { HazardRank } from './types';
 
 export const QUEUE_SORTS = ['startedAt', 'submittedAt', 'siteName', 'inspector', 'status', 'highestHazard'] as const;

@@ -1,5 +1,5 @@
 /** What the review routes send and take (api/README.md, "Review"). */
-import type { CaseStatus } from '../../db/casesTable';
+import type { CaseStatus, DecisionKind } from '@siteband/shared';
 
 /** Hazard rank of a case: 3 escalation, 2 signal word Danger, 1 Warning, 0 none (the rule lives in shared). */
 export type HazardRank = 0 | 1 | 2 | 3;
@@ -29,13 +29,6 @@ export interface QueuePage {
   pageSize: number;
 }
 
-/** The decisions a supervisor takes: three per scan, three per case. */
-export const SCAN_DECISION_KINDS = ['accept', 'replace', 'needs_lab'] as const;
-export const CASE_DECISION_KINDS = ['return', 'sign_off', 'reopen'] as const;
-export type ScanDecisionKind = (typeof SCAN_DECISION_KINDS)[number];
-export type CaseDecisionKind = (typeof CASE_DECISION_KINDS)[number];
-export type DecisionKind = ScanDecisionKind | CaseDecisionKind;
-
 /** A decision as sent. */
 export interface DecisionInput {
   kind: DecisionKind;
@@ -47,16 +40,18 @@ export interface DecisionInput {
   baseVersion: number;
 }
 
-/** One revision of the case's decisions (append-only). */
+/** One revision of the case's decisions (append-only, numbered per case), as the review routes send it and tablets pull it. */
 export interface Decision {
   id: string;
   caseId: string;
+  /** Null for a decision about the whole case. */
   scanId: string | null;
   kind: DecisionKind;
   compoundId: string | null;
   compoundName: string | null;
   reason: string | null;
   comment: string | null;
+  /** 1, 2, 3… per case; which of them are in force is the shared `decisionsInForce`. */
   revision: number;
   decidedBy: string;
   decidedByName: string;

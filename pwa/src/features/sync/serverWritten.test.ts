@@ -2,8 +2,6 @@ import Dexie from 'dexie';
 import { afterEach, describe, expect, it } from 'vitest';
 import { openDb, type SitebandDb } from '../../db/db';
 import type { ServerRecord } from '../../db/captureRecord';
-import type { DecisionRow } from '../../db/decisionsTable';
-import { reviewOutcome } from '../cases/reviewOutcome';
 import { inspectorNextStatus } from '../cases/saveCase';
 import { clearCaptureDataIfSynced } from './clearCaptureData';
 import { mergePulled } from './mergePulled';
@@ -116,24 +114,6 @@ describe('pulling what supervisors and safety officers wrote', () => {
 });
 
 describe("the inspector's view of a review", () => {
-  it("takes each scan's highest revision and the latest decision about the whole case", () => {
-    const row = (revision: number, over: Partial<DecisionRow>): DecisionRow => ({
-      id: crypto.randomUUID(), caseId, scanId: null, kind: 'accept', compoundId: null, compoundName: null, reason: null, comment: null,
-      revision, decidedBy: 'sup-1', decidedByName: 'Dana Reviewer', decidedAt: '2026-12-01T10:00:00.000Z', version: 1, ...over,
-    });
-    const outcome = reviewOutcome([
-      row(1, { scanId: scanA, kind: 'accept' }),
-      row(2, { scanId: scanB, kind: 'needs_lab', comment: 'Send to the lab' }),
-      row(3, { kind: 'return', comment: 'Photograph the seal' }),
-      row(4, { scanId: scanA, kind: 'replace', compoundName: 'Ammonia', reason: 'Better fit' }),
-      row(5, { kind: 'sign_off' }),
-    ]);
-    expect(outcome.byScan.get(scanA)?.kind).toBe('replace');
-    expect(outcome.byScan.get(scanB)?.kind).toBe('needs_lab');
-    expect(outcome.caseDecision?.kind).toBe('sign_off');
-    expect(outcome.history.map((h) => h.revision)).toEqual([5, 4, 3, 2, 1]);
-  });
-
   it('lets the inspector submit an open case, take back a submitted one and reopen a returned one, nothing else', () => {
     expect(inspectorNextStatus('open')).toBe('submitted');
     expect(inspectorNextStatus('submitted')).toBe('open');

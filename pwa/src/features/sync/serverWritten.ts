@@ -1,6 +1,7 @@
+import { DECISION_KINDS } from '@siteband/shared';
 import type { SitebandDb } from '../../db/db';
 import type { ServerRecord } from '../../db/captureRecord';
-import type { DecisionKind, DecisionRow } from '../../db/decisionsTable';
+import type { DecisionRow } from '../../db/decisionsTable';
 import type { EscalationNoteRow } from '../../db/escalationNotesTable';
 import type { EscalationServerState } from '../../db/escalationsTable';
 import { ESCALATION_ACTIONS, ESCALATION_STATUSES, PPE_LEVELS } from '../escalations/types';
@@ -16,8 +17,6 @@ export function isServerWrittenEntity(entity: string): entity is ServerWrittenEn
 export function serverWrittenTables(db: SitebandDb) {
   return [db.decisions, db.escalationNotes];
 }
-
-const DECISION_KINDS: readonly DecisionKind[] = ['accept', 'replace', 'needs_lab', 'return', 'sign_off', 'reopen'];
 
 const text = (value: unknown): string | null => (typeof value === 'string' ? value : null);
 

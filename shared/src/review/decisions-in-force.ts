@@ -1,5 +1,5 @@
-import type { CaseStatus } from '../cases/case.entity';
-import type { DecisionKind } from './review-decision.entity';
+import type { CaseStatus } from './case-status.js';
+import type { DecisionKind } from './decision-kinds.js';
 
 /** What the rule reads of a decision. */
 export interface RevisedDecision {

@@ -1,0 +1,3 @@
+export * from './case-status.js';
+export * from './decision-kinds.js';
+export * from './decisions-in-force.js';
