@@ -70,7 +70,7 @@ export function idleLockTests({ baseUrl, password }) {
       await leaveIdle(page);
       await waitForPage(page, 'Siteband is locked');
       assert.equal(await page.getByLabel('Site name', { exact: true }).filter({ visible: true }).count(), 0, 'the case form is hidden');
-      assert.equal(await page.locator('ion-app').getAttribute('inert'), '', 'the app below cannot be reached');
+      assert.equal(await page.locator('.sb-app').getAttribute('inert'), '', 'the app below cannot be reached');
       await assertAccessible(page, 'the lock screen');
       await screenshot(page, 'idle-lock-pin-800x1280');
 

@@ -1,11 +1,10 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
-import { setupIonicReact } from '@ionic/react';
 import { QueryClient } from '@tanstack/react-query';
 import { registerSW } from 'virtual:pwa-register';
 import i18next from 'i18next';
 
-// Only the Ionic CSS the shell needs; the palette and layout are our own (theme/).
+// Only the Ionic CSS the shell needs (Ionic's code loads with the signed-in area); the palette and layout are our own (theme/).
 import '@ionic/react/css/core.css';
 import '@ionic/react/css/normalize.css';
 import '@ionic/react/css/structure.css';
@@ -27,7 +26,6 @@ import { initI18n } from './i18n';
 /** Opens the database, restores the session and renders; nothing waits on the network. */
 async function start(): Promise<void> {
   applyThemePreference();
-  setupIonicReact({ mode: 'md' });
   const [db] = await Promise.all([openDb(), initI18n()]);
   const sessionStore = createSessionStore(db.session);
   await sessionStore.load();

@@ -1,7 +1,7 @@
-import { IonIcon } from '@ionic/react';
 import { cloudDoneOutline, cloudOfflineOutline } from 'ionicons/icons';
 import { useTranslation } from 'react-i18next';
 import { useOnlineStatus } from '../features/network/onlineStatus';
+import { InlineIcon } from './InlineIcon';
 
 /** Says in words and with an icon whether the tablet is online; never colour alone. */
 export function ConnectionBadge() {
@@ -14,7 +14,7 @@ export function ConnectionBadge() {
       data-testid="connection-status"
       title={online ? undefined : t('connection.offlineDetail')}
     >
-      <IonIcon icon={online ? cloudDoneOutline : cloudOfflineOutline} aria-hidden="true" />
+      <InlineIcon icon={online ? cloudDoneOutline : cloudOfflineOutline} />
       <span>{online ? t('connection.online') : t('connection.offline')}</span>
     </span>
   );

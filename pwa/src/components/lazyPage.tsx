@@ -1,9 +1,9 @@
 import { lazy, Suspense, type ComponentType } from 'react';
 
 /**
- * Loads a top-level screen (the tab shell, the set-password page) in its own chunk so the first paint stays small.
- * The fallback is empty on purpose: Ionic's outlet waits for the screen's own page element, and an
- * interim IonPage would confuse its transition.
+ * Loads a top-level screen (the signed-in area, the set-password page) in its own chunk so the first
+ * paint stays small. The fallback is empty: the chunks are precached, so the wait is short, and the
+ * sign-in page waits for the signed-in area's chunk before it leads there (features/navigation/appArea).
  */
 export function lazyPage(load: () => Promise<{ default: ComponentType }>): ComponentType {
   const Page = lazy(load);

@@ -1,9 +1,8 @@
 import { useEffect, useState, type FormEvent } from 'react';
-import { IonButton, IonInput } from '@ionic/react';
 import { MAX_PASSWORD_BYTES, MIN_PASSWORD_LENGTH, passwordPolicyBreach } from '@siteband/shared';
 import { useTranslation } from 'react-i18next';
 import { useNavigate, useSearchParams } from 'react-router-dom';
-import { FormError, SignInLayout } from '../components/session/SignInLayout';
+import { FormError, SignInField, SignInLayout } from '../components/session/SignInLayout';
 import { useApiClient } from '../features/api/ApiClientContext';
 import { ApiError } from '../features/api/apiError';
 import { setPassword } from '../features/session/authApi';
@@ -55,32 +54,26 @@ export default function SetPasswordPage() {
       ) : (
         <form onSubmit={submit} noValidate>
           <p className="sb-muted">{t('invite.setIntro', { min: MIN_PASSWORD_LENGTH })}</p>
-          <IonInput
-            className="sb-input"
+          <SignInField
             label={t('invite.newPassword')}
-            labelPlacement="stacked"
-            fill="outline"
             type="password"
-            autocomplete="new-password"
+            autoComplete="new-password"
             name="new-password"
             value={password}
-            onIonInput={(e) => setPasswordText(String(e.detail.value ?? ''))}
+            onValue={setPasswordText}
           />
-          <IonInput
-            className="sb-input"
+          <SignInField
             label={t('invite.repeatPassword')}
-            labelPlacement="stacked"
-            fill="outline"
             type="password"
-            autocomplete="new-password"
+            autoComplete="new-password"
             name="repeat-password"
             value={repeat}
-            onIonInput={(e) => setRepeat(String(e.detail.value ?? ''))}
+            onValue={setRepeat}
           />
           <FormError message={error} />
-          <IonButton type="submit" expand="block" className="sb-primary" disabled={busy}>
+          <button type="submit" className="sb-block-button" disabled={busy}>
             {busy ? t('invite.setting') : t('invite.setSubmit')}
-          </IonButton>
+          </button>
         </form>
       )}
     </SignInLayout>

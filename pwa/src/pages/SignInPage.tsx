@@ -1,8 +1,8 @@
 import { useEffect, useRef, useState, type FormEvent } from 'react';
-import { IonButton, IonInput } from '@ionic/react';
 import { useNavigate, useSearchParams } from 'react-router-dom';
 import { useTranslation } from 'react-i18next';
-import { FormError, SignInLayout } from '../components/session/SignInLayout';
+import { FormError, SignInField, SignInLayout } from '../components/session/SignInLayout';
+import { loadSignedInArea } from '../features/navigation/appArea';
 import { homePathForRole } from '../features/navigation/roleTabs';
 import { useOnlineStatus } from '../features/network/onlineStatus';
 import { useSession } from '../features/session/SessionProvider';
@@ -37,13 +37,14 @@ export default function SignInPage() {
     if (online) void signOut();
   }, [status, online, signOut]);
 
-  // One navigation per sign-in, whether the session was just created or already there: Ionic keeps
-  // this page mounted in its stack, and a second navigation would interrupt the tab page's entry.
+  // One navigation per sign-in, whether the session was just created or already there.
   useEffect(() => {
     if (!usable) sentHome.current = false;
     else if (home && !sentHome.current) {
       sentHome.current = true;
-      navigate(home, { replace: true });
+      // The signed-in area is a chunk of its own: this page stays on screen until it has loaded.
+      const go = () => navigate(home, { replace: true });
+      void loadSignedInArea().then(go, go);
     }
   }, [usable, home, navigate]);
 
@@ -79,35 +80,29 @@ export default function SignInPage() {
         </p>
       )}
       <form onSubmit={submit} noValidate>
-        <IonInput
-          className="sb-input"
+        <SignInField
           label={t('signIn.email')}
-          labelPlacement="stacked"
-          fill="outline"
           type="email"
-          inputmode="email"
-          autocomplete="username"
+          inputMode="email"
+          autoComplete="username"
           name="email"
           required
           value={email}
-          onIonInput={(e) => setEmail(String(e.detail.value ?? ''))}
+          onValue={setEmail}
         />
-        <IonInput
-          className="sb-input"
+        <SignInField
           label={t('signIn.password')}
-          labelPlacement="stacked"
-          fill="outline"
           type="password"
-          autocomplete="current-password"
+          autoComplete="current-password"
           name="password"
           required
           value={password}
-          onIonInput={(e) => setPassword(String(e.detail.value ?? ''))}
+          onValue={setPassword}
         />
         <FormError message={error} />
-        <IonButton type="submit" expand="block" className="sb-primary" disabled={busy}>
+        <button type="submit" className="sb-block-button" disabled={busy}>
           {busy ? t('signIn.submitting') : t('signIn.submit')}
-        </IonButton>
+        </button>
       </form>
     </SignInLayout>
   );

@@ -91,7 +91,7 @@ export function IdleLockProvider({ defaultIdleMinutes, children }: { defaultIdle
   // Before paint, so a locked app never shows for a frame.
   useLayoutEffect(() => {
     document.documentElement.classList.toggle(LOCKED_CLASS, locked);
-    document.querySelector('ion-app')?.toggleAttribute('inert', locked);
+    document.querySelector('.sb-app')?.toggleAttribute('inert', locked);
   }, [locked]);
 
   // The PIN and the password are checked alike against their verifier on the tablet, each with its own tries.
