@@ -15,7 +15,7 @@ import './theme/shell.css';
 
 import { App } from './App';
 import { appConfig } from './config/appConfig';
-import { openDb } from './db/db';
+import { readSessionRow } from './db/sessionTable';
 import { entryPath } from './features/navigation/roleTabs';
 import { createApiClient } from './features/api/client';
 import { applyThemePreference } from './features/preferences/themePreference';
@@ -23,12 +23,16 @@ import { sessionStatus } from './features/session/offlineGrace';
 import { createSessionStore } from './features/session/sessionStore';
 import { initI18n } from './i18n';
 
-/** Opens the database, restores the session and renders; nothing waits on the network. */
+/** Restores the session and renders; nothing waits on the network. */
 async function start(): Promise<void> {
   applyThemePreference();
-  const [db] = await Promise.all([openDb(), initI18n()]);
-  const sessionStore = createSessionStore(db.session);
-  await sessionStore.load();
+  // The first screen needs only the session row: it is read without Dexie, which loads and opens
+  // the whole database (with the field records' tables) on the session's first write or first use.
+  const sessionStore = createSessionStore({
+    read: () => readSessionRow(),
+    table: async () => (await import('./features/cases/captureDb')).captureDb().session,
+  });
+  await Promise.all([sessionStore.load(), initI18n()]);
   // "/" is where the installed app starts. Resolving it before the first render draws the first
   // screen once, instead of drawing the redirect and then the screen it leads to.
   if (window.location.pathname === '/') {

@@ -1,4 +1,5 @@
 import Dexie, { type EntityTable } from 'dexie';
+import { DB_NAME } from './dbName';
 import { instrumentChecksSchema, type InstrumentCheckRow } from './instrumentChecksTable';
 import { libraryCacheSchema, type LibraryCacheRow } from './libraryCacheTable';
 import { sessionSchema, type SessionRow } from './sessionTable';
@@ -34,7 +35,7 @@ export class SitebandDb extends Dexie {
   decisions!: EntityTable<DecisionRow, 'id'>;
   escalationNotes!: EntityTable<EscalationNoteRow, 'id'>;
 
-  constructor(name = 'siteband') {
+  constructor(name = DB_NAME) {
     super(name);
     // Version 1: only the signed-in session. Cases, samples and scans arrive with their issues.
     this.version(1).stores({ session: sessionSchema });

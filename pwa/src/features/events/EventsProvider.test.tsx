@@ -3,6 +3,7 @@ import { cleanup, render, screen, waitFor } from '@testing-library/react';
 import { MemoryRouter } from 'react-router-dom';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { openDb, type SitebandDb } from '../../db/db';
+import { sessionRowStorage } from '../../db/sessionTable';
 import { ApiClientProvider } from '../api/ApiClientContext';
 import { createApiClient } from '../api/client';
 import { SessionProvider } from '../session/SessionProvider';
@@ -80,7 +81,7 @@ function renderInbox() {
 beforeEach(async () => {
   Object.defineProperty(window.navigator, 'onLine', { configurable: true, get: () => true });
   db = await openDb(`siteband-events-${Math.random().toString(36).slice(2)}`);
-  store = createSessionStore(db.session);
+  store = createSessionStore(sessionRowStorage(db));
   await store.save(auth);
   inboxLoads = 0;
   streamRequests = [];

@@ -2,6 +2,7 @@ import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { act, cleanup, render, screen, waitFor } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { openDb, type SitebandDb } from '../../db/db';
+import { sessionRowStorage } from '../../db/sessionTable';
 import { ApiClientProvider } from '../api/ApiClientContext';
 import { createApiClient } from '../api/client';
 import { SessionProvider, useSession, type SessionContextValue } from './SessionProvider';
@@ -61,7 +62,7 @@ beforeEach(async () => {
   online = true;
   Object.defineProperty(window.navigator, 'onLine', { configurable: true, get: () => online });
   db = await openDb(`siteband-provider-${Math.random().toString(36).slice(2)}`);
-  store = createSessionStore(db.session);
+  store = createSessionStore(sessionRowStorage(db));
   calls = [];
   answers = {};
   latest = undefined;

@@ -2,9 +2,7 @@ import { createContext, useCallback, useContext, useEffect, useMemo, useState, u
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { useApiClient } from '../api/ApiClientContext';
 import { ApiError } from '../api/apiError';
-import { captureDb } from '../cases/captureDb';
 import { useOnlineStatus } from '../network/onlineStatus';
-import { clearCaptureDataIfSynced, UnsyncedWorkError } from '../sync/clearCaptureData';
 import { lockStore } from '../lock/lockStore';
 import { createVerifier } from '../lock/secretVerifier';
 import { notifySignOutBlocked } from '../sync/signOutBlocked';
@@ -64,7 +62,9 @@ export function SessionProvider({ store, offlineSessionHours, children }: { stor
   );
 
   const signOut = useCallback(async () => {
-    // Refused while field records wait for the server: signing out would lose them.
+    // Refused while field records wait for the server: signing out would lose them. The database
+    // code loads here, not with the first screen (main.tsx).
+    const [{ captureDb }, { clearCaptureDataIfSynced, UnsyncedWorkError }] = await Promise.all([import('../cases/captureDb'), import('../sync/clearCaptureData')]);
     try {
       await clearCaptureDataIfSynced(captureDb());
     } catch (error) {

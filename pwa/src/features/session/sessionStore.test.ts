@@ -1,5 +1,6 @@
 import { afterEach, describe, expect, it } from 'vitest';
 import { openDb, type SitebandDb } from '../../db/db';
+import { sessionRowStorage } from '../../db/sessionTable';
 import { createSessionStore } from './sessionStore';
 import type { AuthResponse } from './types';
 
@@ -29,7 +30,7 @@ describe('session store', () => {
   it('persists a sign-in so a second store over the same database (a reload) sees it', async () => {
     const db = await freshDb();
     const now = Date.UTC(2026, 0, 10, 12);
-    const saved = await createSessionStore(db.session).save(auth, now);
+    const saved = await createSessionStore(sessionRowStorage(db)).save(auth, now);
     expect(saved).toEqual({
       user: auth.user,
       accessToken: 'access-1',
@@ -38,7 +39,7 @@ describe('session store', () => {
       confirmedAt: now,
     });
 
-    const afterReload = createSessionStore(db.session);
+    const afterReload = createSessionStore(sessionRowStorage(db));
     expect(afterReload.current()).toBeUndefined();
     expect(await afterReload.load()).toEqual(saved);
     expect(afterReload.current()).toEqual(saved);
@@ -46,11 +47,11 @@ describe('session store', () => {
 
   it('moves the confirmation time and user on confirm, and keeps the tokens', async () => {
     const db = await freshDb();
-    const store = createSessionStore(db.session);
+    const store = createSessionStore(sessionRowStorage(db));
     await store.save(auth, 1_000);
     const renamed = { ...auth.user, displayName: 'Lab Lead (night shift)' };
     await store.confirm(renamed, 5_000);
-    const reloaded = createSessionStore(db.session);
+    const reloaded = createSessionStore(sessionRowStorage(db));
     const stored = await reloaded.load();
     expect(stored?.confirmedAt).toBe(5_000);
     expect(stored?.user.displayName).toBe('Lab Lead (night shift)');
@@ -59,14 +60,14 @@ describe('session store', () => {
 
   it('confirm without a session stores nothing', async () => {
     const db = await freshDb();
-    const store = createSessionStore(db.session);
+    const store = createSessionStore(sessionRowStorage(db));
     await store.confirm(auth.user, 5_000);
     expect(await db.session.count()).toBe(0);
   });
 
   it('clears from memory and from the database, and tells subscribers', async () => {
     const db = await freshDb();
-    const store = createSessionStore(db.session);
+    const store = createSessionStore(sessionRowStorage(db));
     const seen: (string | undefined)[] = [];
     const unsubscribe = store.subscribe(() => seen.push(store.current()?.accessToken));
     await store.save(auth);
@@ -75,16 +76,16 @@ describe('session store', () => {
     await store.save(auth);
     expect(seen).toEqual(['access-1', undefined]);
     await store.clear();
-    expect(await createSessionStore(db.session).load()).toBeUndefined();
+    expect(await createSessionStore(sessionRowStorage(db)).load()).toBeUndefined();
   });
 
   it('refuses an answer without tokens and keeps the previous session', async () => {
     const db = await freshDb();
-    const store = createSessionStore(db.session);
+    const store = createSessionStore(sessionRowStorage(db));
     await store.save(auth, 1_000);
     const broken = { ...auth, refreshToken: '' };
     await expect(store.save(broken, 2_000)).rejects.toThrow(/without tokens/);
     expect(store.current()?.refreshToken).toBe('refresh-1');
-    expect((await createSessionStore(db.session).load())?.confirmedAt).toBe(1_000);
+    expect((await createSessionStore(sessionRowStorage(db)).load())?.confirmedAt).toBe(1_000);
   });
 });

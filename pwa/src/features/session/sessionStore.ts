@@ -1,5 +1,4 @@
-import type { EntityTable } from 'dexie';
-import { SESSION_ROW_KEY, type SessionRow } from '../../db/sessionTable';
+import { SESSION_ROW_KEY, type SessionRowStorage } from '../../db/sessionTable';
 import type { AuthResponse, SessionUser, StoredSession } from './types';
 
 /** Holds the signed-in session in memory for synchronous reads and in IndexedDB for reloads. */
@@ -18,13 +17,14 @@ export interface SessionStore {
   subscribe(listener: () => void): () => void;
 }
 
-/** Builds a session store over the Dexie `session` table. */
-export function createSessionStore(table: EntityTable<SessionRow, 'key'>): SessionStore {
+/** Builds a session store over the `session` table: read without Dexie at start, written through it. */
+export function createSessionStore(storage: SessionRowStorage): SessionStore {
   let session: StoredSession | undefined;
   const listeners = new Set<() => void>();
 
   // Memory changes only after the database write succeeded, so memory never claims more than disk holds.
   async function write(next: StoredSession | undefined): Promise<void> {
+    const table = await storage.table();
     if (next) await table.put({ key: SESSION_ROW_KEY, ...next });
     else await table.delete(SESSION_ROW_KEY);
     session = next;
@@ -33,7 +33,7 @@ export function createSessionStore(table: EntityTable<SessionRow, 'key'>): Sessi
 
   return {
     async load() {
-      const row = await table.get(SESSION_ROW_KEY);
+      const row = await storage.read();
       if (row) {
         const { key: _key, ...stored } = row;
         session = stored;
