@@ -230,7 +230,7 @@ describe('escalations (e2e)', () => {
     expect(audited).toEqual({ entity: 'escalationNote', action: 'create', actorRole: 'supervisor' });
 
     const [pushed] = await push(t, tokens.inspector, [upsert('escalationNote', randomUUID(), { escalationId: ids.escalation, caseId: ids.case, text: 'From the tablet' })]);
-    expect(pushed).toMatchObject({ status: 'rejected', reason: 'escalationNote records are written by the server only: tablets pull them and never push them' });
+    expect(pushed).toMatchObject({ status: 'rejected', reason: 'Written by the server only (escalation note): tablets pull these records and never push them' });
   });
 
   it('lists escalations a page at a time, filtered by status, raised first', async () => {

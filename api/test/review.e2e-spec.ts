@@ -278,7 +278,7 @@ describe('Review: decisions, the queue, its CSV and the case bundle (e2e)', () =
       const made = await makeCase();
       const [result] = await push(t, tokens.inspector, [upsert('decision', randomUUID(), { caseId: made.caseId, kind: 'accept' })]);
       expect(result.status).toBe('rejected');
-      expect(result.reason).toContain('written by the server only');
+      expect(result.reason).toBe('Written by the server only (review decision): tablets pull these records and never push them');
     });
 
     it("an inspector pulls only the decisions of their own cases; supervisors and safety officers pull all", async () => {

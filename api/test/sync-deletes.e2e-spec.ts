@@ -107,8 +107,8 @@ describe('Sync deletes per entity (e2e, MariaDB)', () => {
     expect(made.map((r) => r.status)).toEqual(['applied', 'applied', 'applied']);
     const refused = await push(t, inspector, [remove('handover', handover, 1), remove('instrumentCheck', check, 1), remove('escalation', escalation, 1), remove('attachment', ids.raw, 1), remove('scan', ids.scan, 1)]);
     expect(refused.map((r) => [r.status, r.reason])).toEqual([
-      ['rejected', 'Permanent record (handover): it cannot be deleted'],
-      ['rejected', 'Permanent record (instrumentCheck): it cannot be deleted'],
+      ['rejected', 'Permanent record (hand-over): it cannot be deleted'],
+      ['rejected', 'Permanent record (instrument check): it cannot be deleted'],
       ['rejected', 'Permanent record (escalation): it cannot be deleted'],
       ['rejected', 'A raw scan file is a permanent record: it cannot be deleted'],
       ['rejected', `Scan ${ids.scan} cannot be deleted while it holds escalations: 1: delete those first (permanent records are never deleted)`],

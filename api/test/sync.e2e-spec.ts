@@ -248,8 +248,8 @@ describe('Sync push and pull (e2e, MariaDB + S3 fake)', () => {
       upsert('scan', randomUUID(), demo.scan(sampleId, { result: { codeVersion: '0.1.0', parameters: {} } })),
     ]);
     expect(results.map((result) => result.status)).toEqual(['applied', 'rejected', 'rejected', 'rejected', 'rejected', 'rejected']);
-    expect(results[1].reason).toBe('Permanent record (handover): it cannot be deleted');
-    expect(results[2].reason).toBe('Permanent record (handover): it cannot be changed once sent');
+    expect(results[1].reason).toBe('Permanent record (hand-over): it cannot be deleted');
+    expect(results[2].reason).toBe('Permanent record (hand-over): it cannot be changed once sent');
     expect(results[3].reason).toBe('excitationNm is only for Raman scans; leave it out for IR');
     expect(results[4].reason).toContain('excitationNm (laser wavelength in nm) is required for a Raman scan');
     expect(results[5].reason).toContain('result needs libraryVersion');

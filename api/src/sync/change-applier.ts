@@ -7,7 +7,7 @@ import type { ChangeResultDto } from './dto/change-result.dto';
 import { SyncRecordDto } from './dto/sync-record.dto';
 import { SyncChange } from './sync-change.entity';
 import { SYNC_COUNTER_ID, SyncCounter } from './sync-counter.entity';
-import { ChangeRejected, SYNC_WRITE_LISTENERS, type ChangeContext, type SyncEntityName, type SyncHandler, type SyncWriteListener } from './sync-handler';
+import { ChangeRejected, ENTITY_NOUNS, SYNC_WRITE_LISTENERS, type ChangeContext, type SyncEntityName, type SyncHandler, type SyncWriteListener } from './sync-handler';
 import { SyncRegistry } from './sync-registry';
 import { lockSyncCounter, nextSyncSeq } from './sync-sequence';
 import type { SyncedRecord } from './synced-record';
@@ -150,20 +150,21 @@ export class ChangeApplier {
   private async decide(ctx: ChangeContext, change: ChangeEnvelopeDto, writes: BatchWrites): Promise<ChangeResultDto> {
     const handler = this.registry.get(change.entity);
     const existing = await this.current(ctx, handler, change.id, writes);
+    const noun = ENTITY_NOUNS[change.entity];
     const conflict = (row: SyncedRecord): ChangeResultDto => ({
       changeId: change.changeId,
       status: 'conflict',
-      reason: `The server has version ${row.version} of this ${change.entity}; the change was made from ${change.baseVersion ?? 'no version (a new record)'}`,
+      reason: `The server has version ${row.version} of this ${noun}; the change was made from ${change.baseVersion ?? 'no version (a new record)'}`,
       server: SyncRecordDto.of(handler, row),
     });
 
     if (change.op === 'delete') {
-      if (!existing) throw new ChangeRejected(`There is no ${change.entity} ${change.id} on the server to delete`);
+      if (!existing) throw new ChangeRejected(`There is no ${noun} ${change.id} on the server to delete`);
       // Authorise before anything about the row is revealed.
       const caseId = await handler.authorize(ctx, change.id, null, existing);
       if (change.baseVersion !== existing.version) return conflict(existing);
-      if (handler.appendOnly) throw new ChangeRejected(`Permanent record (${change.entity}): it cannot be deleted`);
-      if (existing.deletedAt) throw new ChangeRejected(`This ${change.entity} is already deleted`);
+      if (handler.appendOnly) throw new ChangeRejected(`Permanent record (${noun}): it cannot be deleted`);
+      if (existing.deletedAt) throw new ChangeRejected(`This ${noun} is already deleted`);
       await handler.checkDelete?.(ctx, existing);
       const before = structuredClone(handler.toData(existing));
       existing.deletedAt = new Date();
@@ -171,19 +172,19 @@ export class ChangeApplier {
     }
 
     const data = validateData(handler.dataClass, change.data);
-    if (!data.ok) throw new ChangeRejected(`Invalid ${change.entity}: ${data.problems}`);
+    if (!data.ok) throw new ChangeRejected(`Invalid ${noun}: ${data.problems}`);
     const caseId = await handler.authorize(ctx, change.id, data.value, existing);
     if (!existing) {
       if (change.baseVersion !== null) {
-        throw new ChangeRejected(`There is no ${change.entity} ${change.id} on the server: send it with baseVersion null`);
+        throw new ChangeRejected(`There is no ${noun} ${change.id} on the server: send it with baseVersion null`);
       }
       const row = ctx.manager.create(handler.target, { id: change.id, version: 0, deletedAt: null });
       await handler.assign(ctx, row, data.value, { caseId, isNew: true });
       return this.write(ctx, handler, row, writes, change.changeId, { caseId, action: 'create', before: null });
     }
     if (change.baseVersion !== existing.version) return conflict(existing);
-    if (existing.deletedAt) throw new ChangeRejected(`This ${change.entity} was deleted on the server; it cannot be changed`);
-    if (handler.appendOnly) throw new ChangeRejected(`Permanent record (${change.entity}): it cannot be changed once sent`);
+    if (existing.deletedAt) throw new ChangeRejected(`This ${noun} was deleted on the server; it cannot be changed`);
+    if (handler.appendOnly) throw new ChangeRejected(`Permanent record (${noun}): it cannot be changed once sent`);
     const before = structuredClone(handler.toData(existing));
     await handler.assign(ctx, existing, data.value, { caseId, isNew: false });
     return this.write(ctx, handler, existing, writes, change.changeId, { caseId, action: 'update', before });

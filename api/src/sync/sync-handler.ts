@@ -6,6 +6,23 @@ import type { SyncedRecord } from './synced-record';
 export const SYNC_ENTITIES = ['case', 'sample', 'handover', 'scan', 'note', 'instrumentCheck', 'escalation', 'attachment', 'decision', 'escalationNote'] as const;
 export type SyncEntityName = (typeof SYNC_ENTITIES)[number];
 
+/**
+ * How a reason names each kind of record: the words people read next to the record, while the result's
+ * `entity` keeps the protocol name for programs.
+ */
+export const ENTITY_NOUNS: Readonly<Record<SyncEntityName, string>> = {
+  case: 'case',
+  sample: 'sample',
+  handover: 'hand-over',
+  scan: 'scan',
+  note: 'site note',
+  instrumentCheck: 'instrument check',
+  escalation: 'escalation',
+  attachment: 'attachment',
+  decision: 'review decision',
+  escalationNote: 'escalation note',
+};
+
 /** A change the server refuses, with the reason the client shows next to the record. */
 export class ChangeRejected extends Error {
   constructor(reason: string) {

@@ -9,7 +9,7 @@ import { escalationNotePull } from '../escalations/escalation-note.pull';
 import { escalationSyncHandler } from '../scans/escalation.sync-handler';
 import { instrumentCheckSyncHandler } from '../scans/instrument-check.sync-handler';
 import { scanSyncHandler } from '../scans/scan.sync-handler';
-import { ChangeRejected, type PulledKind, type SyncEntityName, type SyncHandler } from './sync-handler';
+import { ChangeRejected, ENTITY_NOUNS, type PulledKind, type SyncEntityName, type SyncHandler } from './sync-handler';
 
 /** Every handler of pushed records, parents before children. */
 const HANDLERS = [
@@ -39,7 +39,7 @@ export class SyncRegistry {
     const handler = this.byEntity.get(entity);
     if (handler) return handler;
     if (PULL_ONLY.some((kind) => kind.entity === entity)) {
-      throw new ChangeRejected(`${entity} records are written by the server only: tablets pull them and never push them`);
+      throw new ChangeRejected(`Written by the server only (${ENTITY_NOUNS[entity]}): tablets pull these records and never push them`);
     }
     throw new Error(`No sync handler for ${entity}`);
   }

@@ -3,10 +3,46 @@ import { useTranslation } from 'react-i18next';
 import { captureDb } from '../../features/cases/captureDb';
 import { tabletData } from '../../features/sync/captureTables';
 import { resolveConflict } from '../../features/sync/resolveConflict';
-import { useConflicts } from '../../features/sync/useConflicts';
+import { useConflicts, type ConflictItem } from '../../features/sync/useConflicts';
 import { ConflictTable } from './ConflictTable';
 
-/** Each conflict of the case with both copies side by side and the two choices. */
+/**
+ * One conflict: the tablet's copy beside the server's and the two choices. When the tablet's side is a
+ * delete it says so, shows the server's copy alone, and the choices read as deleting it anyway or keeping
+ * the server's copy.
+ */
+function ConflictItemView({ entity, row }: ConflictItem) {
+  const { t } = useTranslation();
+  const server = row.conflictServer;
+  const fields = server ? tabletData(entity, server.data) : undefined;
+  const deleted = row.deletePending === true;
+  const choice = deleted ? 'conflict.deleted' : 'conflict';
+  return (
+    <article className="sb-conflict" data-testid={`conflict-${row.id}`} data-op={deleted ? 'delete' : 'upsert'}>
+      <h3>{t(`capture.entity.${entity}`)}</h3>
+      {deleted && (
+        <p className="sb-notice" data-testid="conflict-deleted-here">
+          {server ? t('capture.conflict.deleted.explain', { version: server.version }) : t('capture.conflict.deleted.here')}
+        </p>
+      )}
+      {fields ? (
+        <ConflictTable mine={deleted ? null : (row.data as Record<string, unknown>)} server={fields} serverVersion={server!.version} />
+      ) : (
+        <p className="sb-muted">{t('capture.conflict.serverMissing')}</p>
+      )}
+      <div className="sb-button-row">
+        <IonButton className="sb-primary" disabled={!server} onClick={() => void resolveConflict(captureDb(), entity, row.id, 'mine')}>
+          {t(`capture.${choice}.keepMine`)}
+        </IonButton>
+        <IonButton fill="outline" disabled={!server} onClick={() => void resolveConflict(captureDb(), entity, row.id, 'server')}>
+          {t(`capture.${choice}.takeServer`)}
+        </IonButton>
+      </div>
+    </article>
+  );
+}
+
+/** Each conflict of the case with both versions and a choice. */
 export function ConflictPanel({ caseId }: { caseId: string }) {
   const { t } = useTranslation();
   const conflicts = useConflicts(caseId);
@@ -17,28 +53,9 @@ export function ConflictPanel({ caseId }: { caseId: string }) {
         {t('capture.conflict.heading', { count: conflicts.length })}
       </h2>
       <p className="sb-muted">{t('capture.conflict.explain')}</p>
-      {conflicts.map(({ entity, row }) => {
-        const server = row.conflictServer;
-        const fields = server ? tabletData(entity, server.data) : undefined;
-        return (
-          <article key={row.id} className="sb-conflict">
-            <h3>{t(`capture.entity.${entity}`)}</h3>
-            {fields ? (
-              <ConflictTable mine={row.data as Record<string, unknown>} server={fields} serverVersion={server!.version} />
-            ) : (
-              <p className="sb-muted">{t('capture.conflict.serverMissing')}</p>
-            )}
-            <div className="sb-button-row">
-              <IonButton className="sb-primary" disabled={!server} onClick={() => void resolveConflict(captureDb(), entity, row.id, 'mine')}>
-                {t('capture.conflict.keepMine')}
-              </IonButton>
-              <IonButton fill="outline" disabled={!server} onClick={() => void resolveConflict(captureDb(), entity, row.id, 'server')}>
-                {t('capture.conflict.takeServer')}
-              </IonButton>
-            </div>
-          </article>
-        );
-      })}
+      {conflicts.map((conflict) => (
+        <ConflictItemView key={conflict.row.id} {...conflict} />
+      ))}
     </section>
   );
 }

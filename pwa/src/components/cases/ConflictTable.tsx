@@ -7,30 +7,33 @@ function shown(value: unknown): string {
   return String(value);
 }
 
-/** The tablet's and the server's copy field by field; fields that differ are marked in words. */
-export function ConflictTable({ mine, server, serverVersion }: { mine: Record<string, unknown>; server: Record<string, unknown>; serverVersion: number }) {
+/**
+ * The tablet's and the server's copy field by field; fields that differ are marked in words. A record
+ * deleted on this tablet (`mine` null) has no copy here: the server's fields are shown alone.
+ */
+export function ConflictTable({ mine, server, serverVersion }: { mine: Record<string, unknown> | null; server: Record<string, unknown>; serverVersion: number }) {
   const { t } = useTranslation();
-  const fields = [...new Set([...Object.keys(mine), ...Object.keys(server)])];
+  const fields = [...new Set([...Object.keys(mine ?? {}), ...Object.keys(server)])];
   return (
     <div className="sb-table-wrap">
       <table className="sb-table sb-conflict-table">
         <thead>
           <tr>
             <th scope="col">{t('capture.conflict.field')}</th>
-            <th scope="col">{t('capture.conflict.mine')}</th>
+            {mine && <th scope="col">{t('capture.conflict.mine')}</th>}
             <th scope="col">{t('capture.conflict.server', { version: serverVersion })}</th>
           </tr>
         </thead>
         <tbody>
           {fields.map((field) => {
-            const differs = shown(mine[field]) !== shown(server[field]);
+            const differs = mine !== null && shown(mine[field]) !== shown(server[field]);
             return (
               <tr key={field} className={differs ? 'sb-conflict-table__differs' : undefined}>
                 <th scope="row">
                   {t(`capture.fields.${field}`, { defaultValue: field })}
                   {differs && <span className="sb-conflict-table__mark"> ({t('capture.conflict.differs')})</span>}
                 </th>
-                <td>{shown(mine[field])}</td>
+                {mine && <td>{shown(mine[field])}</td>}
                 <td>{shown(server[field])}</td>
               </tr>
             );
