@@ -49,7 +49,7 @@ describe('Sync deletes per entity (e2e, MariaDB)', () => {
     expect(sample).toMatchObject({ status: 'applied', version: 2 });
     // The raw file is permanent and stays; it belongs to the case, which therefore stays too.
     const [keptCase] = await push(t, inspector, [remove('case', ids.case, 1)]);
-    expect(keptCase).toMatchObject({ status: 'rejected', reason: `Case ${ids.case} cannot be deleted while it holds attachments: 1: delete those first (permanent records are never deleted)` });
+    expect(keptCase).toMatchObject({ status: 'rejected', reason: `Case ${ids.case} cannot be deleted while it holds raw scan files: 1: delete those first (permanent records are never deleted)` });
     const after = await pullAll(t, inspector, cursor);
     expect(after.changes.map((c) => [c.entity, c.id, c.deleted]).sort()).toEqual(
       [['note', ids.caseNote, true], ['note', ids.sampleNote, true], ['attachment', ids.photo, true], ['scan', ids.scan, true], ['sample', ids.sample, true]].sort(),

@@ -17,3 +17,4 @@ export * from './case-archive/index.js';
 export * from './table/index.js';
 export * from './retry/index.js';
 export * from './review/index.js';
+export * from './deletes/index.js';

@@ -3,7 +3,7 @@ import { SiteNote } from '../notes/site-note.entity';
 import { Sample } from '../samples/sample.entity';
 import { Escalation } from '../scans/escalation.entity';
 import { InstrumentCheck } from '../scans/instrument-check.entity';
-import { dependents, refuseWhileReferenced } from '../sync/delete-guards';
+import { dependents, refuseWhileHeld } from '../sync/delete-guards';
 import { ChangeRejected, type SyncHandler } from '../sync/sync-handler';
 import { assertOwnCase } from './case-access';
 import { Case } from './case.entity';
@@ -42,13 +42,14 @@ export const caseSyncHandler: SyncHandler<Case, CaseDataDto> = {
 
   async checkDelete(ctx, existing) {
     if (existing.status !== 'open') throw new ChangeRejected(`Case ${existing.id} is ${existing.status}: only an open case can be deleted`);
-    await refuseWhileReferenced(ctx.manager, `Case ${existing.id}`, [
-      dependents(Sample, { caseId: existing.id }, 'samples'),
-      dependents(SiteNote, { caseId: existing.id }, 'site notes'),
-      dependents(Attachment, { caseId: existing.id }, 'attachments'),
-      dependents(InstrumentCheck, { caseId: existing.id }, 'instrument checks'),
-      dependents(Escalation, { caseId: existing.id }, 'escalations'),
-    ]);
+    await refuseWhileHeld(ctx.manager, 'case', `Case ${existing.id}`, {
+      sample: dependents(Sample, { caseId: existing.id }),
+      siteNote: dependents(SiteNote, { caseId: existing.id }),
+      photo: dependents(Attachment, { caseId: existing.id, kind: 'photo' }),
+      rawScanFile: dependents(Attachment, { caseId: existing.id, kind: 'raw-scan' }),
+      instrumentCheck: dependents(InstrumentCheck, { caseId: existing.id }),
+      escalation: dependents(Escalation, { caseId: existing.id }),
+    });
   },
 
   assign(ctx, row, data, { isNew }) {

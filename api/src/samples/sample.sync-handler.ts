@@ -2,7 +2,7 @@ import { writableCase } from '../cases/case-access';
 import { Attachment } from '../attachments/attachment.entity';
 import { SiteNote } from '../notes/site-note.entity';
 import { Scan } from '../scans/scan.entity';
-import { dependents, refuseWhileReferenced } from '../sync/delete-guards';
+import { dependents, refuseWhileHeld } from '../sync/delete-guards';
 import { ChangeRejected, type SyncHandler } from '../sync/sync-handler';
 import { Handover } from './handover.entity';
 import { SampleDataDto } from './dto/sample-data.dto';
@@ -26,12 +26,12 @@ export const sampleSyncHandler: SyncHandler<Sample, SampleDataDto> = {
   },
 
   async checkDelete(ctx, existing) {
-    await refuseWhileReferenced(ctx.manager, `Sample ${existing.id}`, [
-      dependents(Handover, { sampleId: existing.id }, 'hand-overs'),
-      dependents(Scan, { sampleId: existing.id }, 'scans'),
-      dependents(SiteNote, { sampleId: existing.id }, 'site notes'),
-      dependents(Attachment, { ownerType: 'sample', ownerId: existing.id }, 'photos'),
-    ]);
+    await refuseWhileHeld(ctx.manager, 'sample', `Sample ${existing.id}`, {
+      handover: dependents(Handover, { sampleId: existing.id }),
+      scan: dependents(Scan, { sampleId: existing.id }),
+      siteNote: dependents(SiteNote, { sampleId: existing.id }),
+      photo: dependents(Attachment, { ownerType: 'sample', ownerId: existing.id, kind: 'photo' }),
+    });
   },
 
   assign(_ctx, row, data, { caseId }) {

@@ -2,7 +2,7 @@ import { isDeepStrictEqual } from 'node:util';
 import { Attachment } from '../attachments/attachment.entity';
 import { writableSample } from '../samples/sample-parent';
 import { ReviewDecision } from '../review/review-decision.entity';
-import { dependents, refuseWhileReferenced } from '../sync/delete-guards';
+import { dependents, refuseWhileHeld } from '../sync/delete-guards';
 import { ChangeRejected, type ChangeContext, type SyncHandler } from '../sync/sync-handler';
 import { Escalation } from './escalation.entity';
 import { ScanDataDto } from './dto/scan-data.dto';
@@ -29,11 +29,11 @@ export const scanSyncHandler: SyncHandler<Scan, ScanDataDto> = {
 
   /** Its raw file stays on the server (a permanent record); an escalation or a decision keeps the scan too. */
   async checkDelete(ctx, existing) {
-    await refuseWhileReferenced(ctx.manager, `Scan ${existing.id}`, [
-      dependents(Escalation, { scanId: existing.id }, 'escalations'),
-      dependents(ReviewDecision, { scanId: existing.id }, 'review decisions'),
-      dependents(Attachment, { ownerType: 'scan', ownerId: existing.id, kind: 'photo' }, 'photos'),
-    ]);
+    await refuseWhileHeld(ctx.manager, 'scan', `Scan ${existing.id}`, {
+      escalation: dependents(Escalation, { scanId: existing.id }),
+      decision: dependents(ReviewDecision, { scanId: existing.id }),
+      photo: dependents(Attachment, { ownerType: 'scan', ownerId: existing.id, kind: 'photo' }),
+    });
   },
 
   assign(_ctx, row, data, { caseId, isNew }) {

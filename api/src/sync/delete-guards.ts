@@ -1,29 +1,32 @@
+import { deleteRefusal, findDeleteBlock, type HeldEntity, type HoldingKindOf } from '@siteband/shared';
 import { IsNull, type EntityManager, type FindOptionsWhere } from 'typeorm';
 import { ChangeRejected } from './sync-handler';
 import type { SyncedRecord } from './synced-record';
 
-/** Records below one that keep it from being deleted while any of them is live. */
+/** Where the server finds the live records of one holding kind below a record. */
 export interface Dependents<E extends SyncedRecord = SyncedRecord> {
   target: new () => E;
   where: FindOptionsWhere<E>;
-  /** How the reason names them, plural ("site notes"). */
-  label: string;
 }
 
 /**
- * Refuses the delete of `what` while live records point at it: a deletion never leaves records below a
- * tombstone, and a permanent record (never deleted) keeps what it belongs to for good.
+ * Refuses the delete of `what` while live records hold it (the kinds and their order are the shared
+ * `HOLDING_RECORDS`, which the tablet checks too): a deletion never leaves records below a tombstone,
+ * and a permanent record (never deleted) keeps what it belongs to for good.
  */
-export async function refuseWhileReferenced(manager: EntityManager, what: string, dependents: readonly Dependents[]): Promise<void> {
-  const found: string[] = [];
-  for (const dependent of dependents) {
-    const count = await manager.countBy(dependent.target, { ...dependent.where, deletedAt: IsNull() } as FindOptionsWhere<SyncedRecord>);
-    if (count > 0) found.push(`${dependent.label}: ${count}`);
-  }
-  if (found.length > 0) throw new ChangeRejected(`${what} cannot be deleted while it holds ${found.join(', ')}: delete those first (permanent records are never deleted)`);
+export async function refuseWhileHeld<E extends HeldEntity>(
+  manager: EntityManager,
+  entity: E,
+  what: string,
+  holders: Readonly<Record<HoldingKindOf<E>, Dependents>>,
+): Promise<void> {
+  const block = await findDeleteBlock(entity, (kind) =>
+    manager.countBy(holders[kind].target, { ...holders[kind].where, deletedAt: IsNull() } as FindOptionsWhere<SyncedRecord>),
+  );
+  if (block) throw new ChangeRejected(deleteRefusal(what, block));
 }
 
-/** Declares dependents with their entity's own where-type checked. */
-export function dependents<E extends SyncedRecord>(target: new () => E, where: FindOptionsWhere<E>, label: string): Dependents {
-  return { target, where, label } as unknown as Dependents;
+/** Declares where the records of a holding kind are, with their entity's own where-type checked. */
+export function dependents<E extends SyncedRecord>(target: new () => E, where: FindOptionsWhere<E>): Dependents {
+  return { target, where } as unknown as Dependents;
 }

@@ -1,0 +1,1 @@
+export * from './holding-records.js';
