@@ -1,5 +1,6 @@
 // Browser end-to-end test of editing and deleting on an open case offline: the edits and deletes wait on
-// the tablet, survive a reload, and reach the server with the next sync. Registered in run.mjs.
+// the tablet, survive a reload, and reach the server with the next sync; a case or sample that records
+// below still hold says so instead of being deleted. Registered in run.mjs.
 // The site, sample and notes are an invented demo scenario.
 import assert from 'node:assert/strict';
 import { after, before, describe, it } from 'node:test';
@@ -9,6 +10,8 @@ import { gradientPng, readCapture, waitForSynced } from './capture.mjs';
 import { apiToken, goOffline, signInTo, waitForPage } from './shell.mjs';
 
 const SITE = `Riverside solvent store (e2e ${Date.now() % 100000})`;
+const YARD = `Old tannery yard (e2e ${Date.now() % 100000})`;
+const EMPTY = `Empty kiosk (e2e ${Date.now() % 100000})`;
 
 async function assertAccessible(page, where) {
   assert.deepEqual(await blockingViolations(page), [], `axe found serious or critical problems on ${where}`);
@@ -179,6 +182,153 @@ export function editingTests({ baseUrl, password }) {
       // Photos still open full size on a read-only case.
       await page.getByTestId('case-photos').filter({ visible: true }).getByRole('button', { name: /full size/ }).first().waitFor();
       await assertAccessible(page, 'the submitted case');
+    });
+  });
+
+  describe('deleting a case and a sample offline, and what holds one', { concurrency: false }, () => {
+    let browser;
+    let token;
+    let yardId;
+    let emptyId;
+    let heldSample;
+    let freeSample;
+    before(async () => {
+      browser = await openBrowser({ origin: baseUrl, width: 800, height: 1280 });
+      token = await apiToken(baseUrl, 'inspector@demo.test', password);
+    });
+    after(async () => {
+      await browser?.close();
+    });
+
+    async function newCase(page, site) {
+      await page.goto(`${baseUrl}/tabs/cases`);
+      await waitForPage(page, 'Cases');
+      await page.getByTestId('new-case').filter({ visible: true }).click();
+      await waitForPage(page, 'New case');
+      await page.getByLabel('Site name', { exact: true }).fill(site);
+      await page.getByRole('button', { name: 'Save case' }).filter({ visible: true }).click();
+      await waitForPage(page, site);
+      return page.url().split('/').pop();
+    }
+
+    async function newSample(page, label) {
+      await page.getByTestId('new-sample').filter({ visible: true }).click();
+      await waitForPage(page, 'New sample');
+      await page.getByLabel('Label', { exact: true }).filter({ visible: true }).fill(label);
+      await page.getByRole('button', { name: 'Save sample' }).filter({ visible: true }).click();
+      await waitForPage(page, `Sample ${label}`);
+      return page.url().split('/').pop();
+    }
+
+    it('records a case with a sample handed over and one not, and an empty case, and syncs them', async () => {
+      const { page } = browser;
+      await signInTo(page, baseUrl, 'inspector@demo.test', password, 'Cases');
+      emptyId = await newCase(page, EMPTY);
+      yardId = await newCase(page, YARD);
+      heldSample = await newSample(page, 'TY-01');
+      const custody = page.getByRole('form', { name: 'New hand-over' }).filter({ visible: true });
+      await custody.getByLabel('Received by', { exact: true }).fill('Courier J. Demo');
+      await custody.getByRole('button', { name: 'Record hand-over' }).click();
+      await page.getByTestId('handovers').filter({ visible: true }).getByText('Courier J. Demo').waitFor();
+      await page.goto(`${baseUrl}/tabs/cases/${yardId}`);
+      await waitForPage(page, YARD);
+      freeSample = await newSample(page, 'TY-02');
+      await page.goto(`${baseUrl}/tabs/cases/${yardId}`);
+      await waitForPage(page, YARD);
+      await page.getByTestId('sync-now').filter({ visible: true }).click();
+      await waitForSynced(page);
+      const yard = await caseOnServer(token, yardId);
+      assert.deepEqual(yard.samples.map((s) => s.id).sort(), [heldSample, freeSample].sort());
+      assert.equal((await caseOnServer(token, emptyId)).case.siteName, EMPTY);
+    });
+
+    it('offline, says plainly why a handed-over sample and a case with samples cannot go, and deletes a sample and an empty case after asking', async () => {
+      const { page, context } = browser;
+      await goOffline(page, context);
+
+      // A sample with a hand-over: the action names what holds it, and nothing is queued.
+      await page.goto(`${baseUrl}/tabs/cases/${yardId}/samples/${heldSample}`);
+      await waitForPage(page, 'Sample TY-01');
+      await page.getByTestId('delete-sample').filter({ visible: true }).click();
+      const refused = page.getByTestId('delete-sample-refused').filter({ visible: true });
+      await refused.waitFor();
+      assert.equal(
+        (await refused.locator('p').textContent()).trim(),
+        'This sample holds 1 hand-over. Permanent records are never deleted (hand-overs), so this sample cannot be deleted.',
+      );
+      await assertAccessible(page, 'a sample refusing its delete');
+      await screenshot(page, 'editing-sample-delete-refused-800x1280');
+      const understood = refused.getByRole('button', { name: 'Understood' });
+      const box = await understood.boundingBox();
+      assert.ok(box && box.height >= 48, `the button is ${box?.height} px high`);
+      await understood.click();
+      await page.getByTestId('delete-sample').filter({ visible: true }).waitFor();
+      assert.equal((await page.evaluate(readCapture)).outbox.length, 0);
+
+      // The case holds its two samples: delete them first.
+      await page.goto(`${baseUrl}/tabs/cases/${yardId}`);
+      await waitForPage(page, YARD);
+      await page.getByTestId('delete-case').filter({ visible: true }).click();
+      assert.equal(
+        (await page.getByTestId('delete-case-refused').filter({ visible: true }).locator('p').textContent()).trim(),
+        'This case holds 2 samples. Delete its samples first, then the case.',
+      );
+      await page.getByRole('button', { name: 'Understood' }).filter({ visible: true }).click();
+
+      // A sample without scans or hand-overs: asked first, then deleted, and the case page again.
+      await page.goto(`${baseUrl}/tabs/cases/${yardId}/samples/${freeSample}`);
+      await waitForPage(page, 'Sample TY-02');
+      await page.getByTestId('delete-sample').filter({ visible: true }).click();
+      const confirm = page.getByTestId('delete-sample-confirm').filter({ visible: true });
+      await confirm.waitFor();
+      assert.match(await confirm.textContent(), /Delete this sample\?/);
+      await assertAccessible(page, 'a sample asking before its delete');
+      const yes = confirm.getByRole('button', { name: 'Yes, delete' });
+      assert.ok((await yes.boundingBox()).height >= 48);
+      await yes.click();
+      await waitForPage(page, YARD);
+      await page.getByTestId('sample-TY-01').filter({ visible: true }).waitFor();
+      assert.equal(await page.getByTestId('sample-TY-02').filter({ visible: true }).count(), 0);
+
+      // The empty case: asked, deleted, back to the list of cases without it.
+      await page.goto(`${baseUrl}/tabs/cases/${emptyId}`);
+      await waitForPage(page, EMPTY);
+      await page.getByTestId('delete-case').filter({ visible: true }).click();
+      await page.getByTestId('delete-case-confirm').filter({ visible: true }).getByRole('button', { name: 'Yes, delete' }).click();
+      await waitForPage(page, 'Cases');
+      await page.getByText(YARD).filter({ visible: true }).first().waitFor();
+      assert.equal(await page.getByText(EMPTY).filter({ visible: true }).count(), 0);
+
+      // Both wait on the tablet, hidden, with their delete changes, also after a reload.
+      await page.reload();
+      await waitForPage(page, 'Cases');
+      await page.getByText(YARD).filter({ visible: true }).first().waitFor();
+      assert.equal(await page.getByText(EMPTY).filter({ visible: true }).count(), 0);
+      const local = await page.evaluate(readCapture);
+      assert.equal(local.cases.find((c) => c.id === emptyId)?.deletePending, true);
+      assert.equal(local.samples.find((s) => s.id === freeSample)?.deletePending, true);
+      assert.deepEqual(local.outbox.map((e) => [e.entity, e.op, e.id]).sort(), [['case', 'delete', emptyId], ['sample', 'delete', freeSample]].sort());
+    });
+
+    it('syncs the deletes: the server keeps them as tombstones, the handed-over sample stays', async () => {
+      const { page, context } = browser;
+      await context.setOffline(false);
+      await page.getByTestId('connection-status').filter({ visible: true }).filter({ hasText: 'Online' }).waitFor();
+      await page.goto(`${baseUrl}/tabs/cases/${yardId}`);
+      await waitForPage(page, YARD);
+      await page.getByTestId('sync-now').filter({ visible: true }).click();
+      const local = await waitForSynced(page);
+      assert.equal(local.cases.some((c) => c.id === emptyId), false);
+      assert.equal(local.samples.some((s) => s.id === freeSample), false);
+
+      const gone = await fetch(`${baseUrl}/api/cases/${emptyId}`, { headers: { Authorization: `Bearer ${token}` } });
+      assert.equal(gone.status, 404);
+      assert.deepEqual((await caseOnServer(token, yardId)).samples.map((s) => s.id), [heldSample]);
+      const pulled = await (await fetch(`${baseUrl}/api/sync/pull?cursor=0&limit=1000`, { headers: { Authorization: `Bearer ${token}` } })).json();
+      const tombstone = (id) => pulled.changes.find((c) => c.id === id);
+      assert.equal(tombstone(emptyId)?.deleted, true);
+      assert.equal(tombstone(freeSample)?.deleted, true);
+      assert.equal(tombstone(heldSample)?.deleted, false);
     });
   });
 }

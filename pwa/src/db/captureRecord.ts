@@ -46,5 +46,10 @@ export function isLive(row: Pick<CaptureRow<unknown>, 'deletePending'>): boolean
   return row.deletePending !== true;
 }
 
+/** The row when it is there and live, else null: what a screen showing one record shows. */
+export function liveOrNull<R extends Pick<CaptureRow<unknown>, 'deletePending'>>(row: R | undefined): R | null {
+  return row && isLive(row) ? row : null;
+}
+
 /** Dexie index spec shared by the capture tables: id, the owning case, and edit time for lists. */
 export const captureRowSchema = 'id, caseId, editedAt';

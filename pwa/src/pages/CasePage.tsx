@@ -1,10 +1,11 @@
 import { IonButton, IonIcon } from '@ionic/react';
 import { addOutline, createOutline } from 'ionicons/icons';
 import { useTranslation } from 'react-i18next';
-import { useParams } from 'react-router-dom';
+import { useNavigate, useParams } from 'react-router-dom';
 import { CaseExportButton } from '../components/caseArchive/CaseExportButton';
 import { CaseFacts } from '../components/cases/CaseFacts';
 import { ConflictPanel } from '../components/cases/ConflictPanel';
+import { DeleteHeldRecord } from '../components/cases/DeleteHeldRecord';
 import { CasePhotos } from '../components/cases/CasePhotos';
 import { NotesPanel } from '../components/cases/NotesPanel';
 import { SampleList } from '../components/cases/SampleList';
@@ -24,6 +25,7 @@ import { useCase } from '../features/cases/useCases';
 export default function CasePage() {
   const { t } = useTranslation();
   const { id = '' } = useParams();
+  const navigate = useNavigate();
   const row = useCase(id);
   const outcome = useCaseOutcome(id);
   const title = row ? row.data.siteName : t('capture.case.title');
@@ -74,6 +76,15 @@ export default function CasePage() {
           )}
           <CaseExportButton caseId={id} />
         </div>
+        {open && (
+          <DeleteHeldRecord
+            entity="case"
+            id={id}
+            question={t('editing.case.delete')}
+            consequence={t('editing.case.consequence')}
+            onDeleted={() => navigate(casePaths.list, { replace: true })}
+          />
+        )}
         {row.data.status === 'submitted' && <p className="sb-muted">{t('capture.case.frozen')}</p>}
         {!open && row.data.status !== 'submitted' && (
           <p className="sb-muted" data-testid="case-read-only">

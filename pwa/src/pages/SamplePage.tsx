@@ -1,6 +1,7 @@
 import { IonButton } from '@ionic/react';
 import { useTranslation } from 'react-i18next';
 import { useNavigate, useParams } from 'react-router-dom';
+import { DeleteHeldRecord } from '../components/cases/DeleteHeldRecord';
 import { HandoverPanel } from '../components/cases/HandoverPanel';
 import { NotesPanel } from '../components/cases/NotesPanel';
 import { PhotoPicker } from '../components/cases/PhotoPicker';
@@ -70,6 +71,15 @@ export default function SamplePage() {
           <HandoverPanel caseId={caseId} sampleId={sample.id} defaultFrom={sample.data.collectedBy} editable={editable} />
           <NotesPanel caseId={caseId} sampleId={sample.id} editable={editable} />
           <SampleScanList caseId={caseId} sampleId={sample.id} editable={editable} />
+          {editable && (
+            <DeleteHeldRecord
+              entity="sample"
+              id={sample.id}
+              question={t('editing.sample.delete')}
+              consequence={t('editing.sample.consequence')}
+              onDeleted={() => navigate(casePaths.case(caseId), { replace: true })}
+            />
+          )}
         </>
       )}
       <CautionNote laser />

@@ -1,7 +1,8 @@
 import { IonButton } from '@ionic/react';
 import { useTranslation } from 'react-i18next';
 import { useEffect, useState } from 'react';
-import { useLocation, useParams } from 'react-router-dom';
+import { useLocation, useNavigate, useParams } from 'react-router-dom';
+import { DeleteHeldRecord } from '../components/cases/DeleteHeldRecord';
 import { CautionNote } from '../components/CautionNote';
 import { PageShell } from '../components/PageShell';
 import { casePaths } from '../features/cases/casePaths';
@@ -17,9 +18,10 @@ import { ScanCapture } from './CapturePage';
 import { SampleScanDetail } from './SampleScanDetail';
 import { SampleScanSave } from './SampleScanSave';
 
-/** A saved scan of one sample as stored on the tablet. */
-function SavedScan({ scanId }: { scanId: string }) {
+/** A saved scan of one sample as stored on the tablet; on an open case, deleted after asking (back to `backTo`). */
+function SavedScan({ scanId, editable, backTo }: { scanId: string; editable: boolean; backTo: string }) {
   const { t } = useTranslation();
+  const navigate = useNavigate();
   const record = useScanRecord(scanId);
   if (record === undefined) return null;
   if (record === null) {
@@ -29,7 +31,20 @@ function SavedScan({ scanId }: { scanId: string }) {
       </p>
     );
   }
-  return <SampleScanDetail {...record} />;
+  return (
+    <>
+      <SampleScanDetail {...record} />
+      {editable && (
+        <DeleteHeldRecord
+          entity="scan"
+          id={scanId}
+          question={t('editing.scan.delete')}
+          consequence={t('editing.scan.consequence')}
+          onDeleted={() => navigate(backTo, { replace: true })}
+        />
+      )}
+    </>
+  );
 }
 
 /** The scan screen bound to a sample (`scans/new`), or one of the sample's saved scans. */
@@ -73,7 +88,7 @@ export default function SampleScanPage() {
           {t('capture.scans.backToSample', { label: sample.data.label })}
         </IonButton>
       </div>
-      {!isNew && <SavedScan scanId={scanId} />}
+      {!isNew && <SavedScan scanId={scanId} editable={editable} backTo={casePaths.sample(caseId, sampleId)} />}
       {isNew && !editable && <p className="sb-notice">{t('capture.case.frozen')}</p>}
       {isNew && sharedGone && (
         <p className="sb-error" role="alert">

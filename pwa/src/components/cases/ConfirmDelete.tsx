@@ -5,9 +5,23 @@ import { useTranslation } from 'react-i18next';
 
 /**
  * A delete button that asks first, in place: the question with "Yes, delete" and "Keep it". A failed
- * delete shows its reason and deletes nothing.
+ * delete shows its reason and deletes nothing. With a `refusal` (what keeps the record), the button
+ * tells that instead of asking.
  */
-export function ConfirmDelete({ question, onDelete, testId }: { question: string; onDelete: () => Promise<void>; testId: string }) {
+export function ConfirmDelete({
+  question,
+  onDelete,
+  testId,
+  consequence,
+  refusal,
+}: {
+  question: string;
+  onDelete: () => Promise<void>;
+  testId: string;
+  /** What else the delete means, said after the question. */
+  consequence?: string;
+  refusal?: string;
+}) {
   const { t } = useTranslation();
   const [asking, setAsking] = useState(false);
   const [error, setError] = useState<string>();
@@ -34,10 +48,23 @@ export function ConfirmDelete({ question, onDelete, testId }: { question: string
       </IonButton>
     );
   }
+  if (refusal) {
+    return (
+      <div className="sb-confirm" role="group" aria-labelledby={questionId} data-testid={`${testId}-refused`}>
+        <p id={questionId} ref={questionRef} tabIndex={-1}>
+          {refusal}
+        </p>
+        <IonButton fill="outline" onClick={() => setAsking(false)}>
+          {t('editing.understood')}
+        </IonButton>
+      </div>
+    );
+  }
   return (
     <div className="sb-confirm" role="group" aria-labelledby={questionId} data-testid={`${testId}-confirm`}>
       <p id={questionId} ref={questionRef} tabIndex={-1}>
-        <strong>{question}</strong> {t('editing.deleteHint')}
+        <strong>{question}</strong> {consequence && `${consequence} `}
+        {t('editing.deleteHint')}
       </p>
       {error && (
         <p className="sb-error" role="alert">

@@ -1,5 +1,5 @@
 import { useLiveQuery } from 'dexie-react-hooks';
-import { isLive } from '../../db/captureRecord';
+import { isLive, liveOrNull } from '../../db/captureRecord';
 import type { CaseRow } from '../../db/casesTable';
 import { captureDb } from './captureDb';
 
@@ -22,7 +22,7 @@ export function useCaseList(): CaseListItem[] | undefined {
   });
 }
 
-/** Live: one case; undefined while loading, null when the tablet has no such case. */
+/** Live: one case; undefined while loading, null when the tablet has no such case (or it was deleted here). */
 export function useCase(id: string | undefined): CaseRow | null | undefined {
-  return useLiveQuery(async () => (id ? ((await captureDb().cases.get(id)) ?? null) : null), [id]);
+  return useLiveQuery(async () => liveOrNull(id ? await captureDb().cases.get(id) : undefined), [id]);
 }

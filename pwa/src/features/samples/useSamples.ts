@@ -1,5 +1,5 @@
 import { useLiveQuery } from 'dexie-react-hooks';
-import { isLive } from '../../db/captureRecord';
+import { isLive, liveOrNull } from '../../db/captureRecord';
 import type { HandoverRow } from '../../db/handoversTable';
 import type { SampleRow } from '../../db/samplesTable';
 import { captureDb } from '../cases/captureDb';
@@ -9,9 +9,9 @@ export function useSamples(caseId: string): SampleRow[] | undefined {
   return useLiveQuery(async () => (await captureDb().samples.where('caseId').equals(caseId).filter(isLive).toArray()).sort((a, b) => a.data.collectedAt.localeCompare(b.data.collectedAt)), [caseId]);
 }
 
-/** Live: one sample; null when the tablet has none with that id. */
+/** Live: one sample; null when the tablet has none with that id (or it was deleted here). */
 export function useSample(id: string | undefined): SampleRow | null | undefined {
-  return useLiveQuery(async () => (id ? ((await captureDb().samples.get(id)) ?? null) : null), [id]);
+  return useLiveQuery(async () => liveOrNull(id ? await captureDb().samples.get(id) : undefined), [id]);
 }
 
 /** Live: the hand-overs of a sample, oldest first (the chain of custody in order). */

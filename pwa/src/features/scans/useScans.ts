@@ -1,5 +1,5 @@
 import { useLiveQuery } from 'dexie-react-hooks';
-import { isLive } from '../../db/captureRecord';
+import { isLive, liveOrNull } from '../../db/captureRecord';
 import type { EscalationRow } from '../../db/escalationsTable';
 import type { PhotoRow } from '../../db/photosTable';
 import type { ScanRow } from '../../db/scansTable';
@@ -13,11 +13,11 @@ export function useSampleScans(sampleId: string): ScanRow[] | undefined {
   }, [sampleId]);
 }
 
-/** Live: one scan with its raw file's attachment and its escalations; null when the tablet has no such scan. */
+/** Live: one scan with its raw file's attachment and its escalations; null when the tablet has no such scan (or it was deleted here). */
 export function useScanRecord(scanId: string): { scan: ScanRow; raw: PhotoRow | null; escalations: EscalationRow[] } | null | undefined {
   return useLiveQuery(async () => {
     const db = captureDb();
-    const scan = await db.scans.get(scanId);
+    const scan = liveOrNull(await db.scans.get(scanId));
     if (!scan) return null;
     const raw = (await db.photos.get(scan.data.rawAttachmentId)) ?? null;
     const escalations = await db.escalations.filter((e) => e.data.scanId === scanId).toArray();

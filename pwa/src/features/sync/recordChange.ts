@@ -95,13 +95,8 @@ export async function recordDelete(db: SitebandDb, entity: CaptureEntity, id: st
     const row = await table.get(id);
     if (!row) throw new Error(`There is no ${entity} ${id} on this tablet to delete`);
     if (PERMANENT.has(entity) || (entity === 'attachment' && (row.data as { kind?: string }).kind === 'raw-scan')) throw new PermanentRecordError(entity);
+    if (await dropNeverSent(db, entity, id)) return;
     const entries = await entriesFor(db, entity, id);
-    const inFlight = entries.filter((e) => e.status === 'sending');
-    if (row.version === null && inFlight.length === 0) {
-      await db.outbox.bulkDelete(entries.map((e) => e.seq!));
-      await table.delete(id);
-      return;
-    }
     await db.outbox.bulkDelete(entries.filter((e) => e.status !== 'sending').map((e) => e.seq!));
     const version = row.conflictServer?.version ?? row.version;
     await table.put({ ...row, version, conflictServer: undefined, deletePending: true, editedAt: now });
@@ -118,5 +113,21 @@ export async function recordDelete(db: SitebandDb, entity: CaptureEntity, id: st
       createdAt: now,
     });
     await refreshSyncState(db, entity, id);
+  });
+}
+
+/**
+ * Drops a record the server never had (no confirmed version, no change in flight) with its unsent changes,
+ * in one transaction; true when it went. Nothing of it is kept, since nothing of it exists anywhere else.
+ */
+export async function dropNeverSent(db: SitebandDb, entity: CaptureEntity, id: string): Promise<boolean> {
+  const table = tableFor(db, entity);
+  return db.transaction('rw', captureScope(db), async () => {
+    const row = await table.get(id);
+    const entries = await entriesFor(db, entity, id);
+    if (!row || row.version !== null || entries.some((e) => e.status === 'sending')) return false;
+    await db.outbox.bulkDelete(entries.map((e) => e.seq!));
+    await table.delete(id);
+    return true;
   });
 }
