@@ -3,12 +3,16 @@
 // below still hold says so instead of being deleted. Registered in run.mjs.
 // The site, sample and notes are an invented demo scenario.
 import assert from 'node:assert/strict';
+import { readFileSync } from 'node:fs';
+import { dirname, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { after, before, describe, it } from 'node:test';
 import { blockingViolations } from './axe.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
 import { gradientPng, readCapture, waitForSynced } from './capture.mjs';
 import { apiToken, goOffline, signInTo, waitForPage } from './shell.mjs';
 
+const SPECTRA = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'fixtures', 'spectra');
 const SITE = `Riverside solvent store (e2e ${Date.now() % 100000})`;
 const YARD = `Old tannery yard (e2e ${Date.now() % 100000})`;
 const EMPTY = `Empty kiosk (e2e ${Date.now() % 100000})`;
@@ -185,7 +189,7 @@ export function editingTests({ baseUrl, password }) {
     });
   });
 
-  describe('deleting a case and a sample offline, and what holds one', { concurrency: false }, () => {
+  describe('deleting a case, a sample and a scan offline, and what holds one', { concurrency: false }, () => {
     let browser;
     let token;
     let yardId;
@@ -329,6 +333,64 @@ export function editingTests({ baseUrl, password }) {
       assert.equal(tombstone(emptyId)?.deleted, true);
       assert.equal(tombstone(freeSample)?.deleted, true);
       assert.equal(tombstone(heldSample)?.deleted, false);
+    });
+
+    it('deletes a synced scan offline after asking: the scan goes, its raw file stays on the tablet and the server', async () => {
+      const { page, context } = browser;
+      await page.goto(`${baseUrl}/tabs/cases/${yardId}/samples/${heldSample}`);
+      await waitForPage(page, 'Sample TY-01');
+      const library = page.waitForResponse((r) => new URL(r.url()).pathname === '/api/library' && r.ok());
+      await page.getByTestId('add-scan').filter({ visible: true }).click();
+      await waitForPage(page, 'New scan of TY-01');
+      await library;
+      const name = 'synthetic-ir-ethanol-liquid.csv';
+      await page.getByTestId('scan-file').last().setInputFiles({ name, mimeType: 'text/csv', buffer: readFileSync(join(SPECTRA, name)) });
+      await page.getByTestId('candidate-ethanol').last().waitFor({ timeout: 30_000 });
+      await page.getByLabel(/I have read the caution cards/).check();
+      await page.getByRole('button', { name: 'Acknowledge and mark reviewed by inspector' }).last().click();
+      await page.getByTestId('save-scan').last().click();
+      await waitForPage(page, 'Scan of TY-01');
+      const scanUrl = page.url();
+      const scanId = scanUrl.split('/').pop();
+      await page.goto(`${baseUrl}/tabs/cases/${yardId}`);
+      await waitForPage(page, YARD);
+      await page.getByTestId('sync-now').filter({ visible: true }).click();
+      const synced = await waitForSynced(page);
+      const rawId = synced.scans.find((s) => s.id === scanId).data.rawAttachmentId;
+      assert.equal(synced.escalations.filter((e) => e.data.scanId === scanId).length, 0, 'a scan an escalation holds could not be deleted');
+
+      await goOffline(page, context);
+      await page.goto(scanUrl);
+      await waitForPage(page, 'Scan of TY-01');
+      await page.getByTestId('delete-scan').filter({ visible: true }).click();
+      const confirm = page.getByTestId('delete-scan-confirm').filter({ visible: true });
+      assert.match(await confirm.textContent(), /Delete this scan\?.*Its raw file stays: a permanent record/s);
+      await assertAccessible(page, 'a scan asking before its delete');
+      await screenshot(page, 'editing-scan-confirm-delete-800x1280');
+      await confirm.getByRole('button', { name: 'Yes, delete' }).click();
+      await waitForPage(page, 'Sample TY-01');
+      await page.getByText('No scans of this sample yet.').filter({ visible: true }).waitFor();
+      await page.reload();
+      await waitForPage(page, 'Sample TY-01');
+      assert.equal(await page.getByTestId('sample-scan').filter({ visible: true }).count(), 0);
+      const local = await page.evaluate(readCapture);
+      assert.equal(local.scans.find((s) => s.id === scanId)?.deletePending, true);
+      const raw = local.photos.find((p) => p.id === rawId);
+      assert.equal(raw?.deletePending, undefined);
+      assert.ok(raw.byteLength > 0, 'the raw file keeps its bytes on the tablet');
+      assert.deepEqual(local.outbox.map((e) => [e.entity, e.op, e.id]), [['scan', 'delete', scanId]]);
+
+      await context.setOffline(false);
+      await page.getByTestId('connection-status').filter({ visible: true }).filter({ hasText: 'Online' }).waitFor();
+      await page.goto(`${baseUrl}/tabs/cases/${yardId}`);
+      await waitForPage(page, YARD);
+      await page.getByTestId('sync-now').filter({ visible: true }).click();
+      const after = await waitForSynced(page);
+      assert.equal(after.scans.some((s) => s.id === scanId), false);
+      assert.ok(after.photos.some((p) => p.id === rawId), 'the raw file stays on the tablet');
+      const pulled = await (await fetch(`${baseUrl}/api/sync/pull?cursor=0&limit=1000`, { headers: { Authorization: `Bearer ${token}` } })).json();
+      assert.equal(pulled.changes.find((c) => c.id === scanId)?.deleted, true);
+      assert.equal(pulled.changes.find((c) => c.id === rawId)?.deleted, false);
     });
   });
 }
