@@ -1,4 +1,4 @@
-import { StrictMode } from 'react';
+import { startTransition, StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { QueryClient } from '@tanstack/react-query';
 import { registerSW } from 'virtual:pwa-register';
@@ -44,16 +44,21 @@ async function start(): Promise<void> {
   const queryClient = new QueryClient({
     defaultOptions: { queries: { networkMode: 'online', retry: 1 } },
   });
-  createRoot(document.getElementById('root')!).render(
-    <StrictMode>
-      <App
-        queryClient={queryClient}
-        apiClient={apiClient}
-        sessionStore={sessionStore}
-        offlineSessionHours={appConfig.offlineSessionHours}
-        idleLockMinutes={appConfig.idleLockMinutes}
-      />
-    </StrictMode>,
+  const root = createRoot(document.getElementById('root')!);
+  // As a transition, React renders the first screen in slices and yields to the browser between
+  // them, instead of one long task that would block a slow tablet's input until it is done.
+  startTransition(() =>
+    root.render(
+      <StrictMode>
+        <App
+          queryClient={queryClient}
+          apiClient={apiClient}
+          sessionStore={sessionStore}
+          offlineSessionHours={appConfig.offlineSessionHours}
+          idleLockMinutes={appConfig.idleLockMinutes}
+        />
+      </StrictMode>,
+    ),
   );
   // The service worker precaches the shell so a reload without network still renders it. It is
   // registered at the window's load event, so its precache downloads do not compete with first paint.
