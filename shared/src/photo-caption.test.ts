@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { PHOTO_CAPTION_MAX_LENGTH, photoCaptionOf, photoCaptionProblem } from './photo-caption.js';
+import { PHOTO_CAPTION_MAX_LENGTH, photoCaptionLength, photoCaptionOf, photoCaptionProblem } from './photo-caption.js';
 
 describe('photo captions', () => {
   it('keeps a caption trimmed and turns an empty one into none', () => {
@@ -13,5 +13,6 @@ describe('photo captions', () => {
     expect(photoCaptionProblem('🧪'.repeat(PHOTO_CAPTION_MAX_LENGTH))).toBeNull();
     expect(photoCaptionProblem('x'.repeat(PHOTO_CAPTION_MAX_LENGTH + 1))).toBe(`caption must be at most ${PHOTO_CAPTION_MAX_LENGTH} characters; this one has ${PHOTO_CAPTION_MAX_LENGTH + 1}`);
     expect(photoCaptionProblem(null)).toBeNull();
+    expect(photoCaptionLength('  🧪 drum ')).toBe(6);
   });
 });

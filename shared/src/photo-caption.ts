@@ -7,8 +7,13 @@ export function photoCaptionOf(text: string | null | undefined): string | null {
   return trimmed === '' ? null : trimmed;
 }
 
-/** Why a caption cannot be kept, or null. Characters are counted as code points, as MariaDB counts them. */
+/** How many characters a caption keeps, counted as code points, as MariaDB counts them. */
+export function photoCaptionLength(text: string | null | undefined): number {
+  return [...(photoCaptionOf(text) ?? '')].length;
+}
+
+/** Why a caption cannot be kept, or null. */
 export function photoCaptionProblem(caption: string | null): string | null {
-  const length = caption === null ? 0 : [...caption].length;
+  const length = photoCaptionLength(caption);
   return length > PHOTO_CAPTION_MAX_LENGTH ? `caption must be at most ${PHOTO_CAPTION_MAX_LENGTH} characters; this one has ${length}` : null;
 }

@@ -10,6 +10,8 @@ export interface PhotoData {
   size: number;
   /** Lower-case hex SHA-256 of `bytes`. */
   sha256: string;
+  /** What a photo shows, in the inspector's words (`photoCaptionOf` in shared); absent in records made before captions. */
+  caption?: string | null;
 }
 
 /**

@@ -33,7 +33,7 @@ function Photos({ attachments }: { attachments: FlatRecord[] }) {
   return (
     <div className="sb-review-photos">
       {photos.map((p) => (
-        <ReviewPhoto key={p.id} attachmentId={p.id} fileName={text(p.fileName)} />
+        <ReviewPhoto key={p.id} attachmentId={p.id} fileName={text(p.fileName)} caption={text(p.caption) || null} />
       ))}
     </div>
   );

@@ -34,7 +34,7 @@ export function CasePhotos({ caseId, editable }: { caseId: string; editable: boo
                 <PhotoThumb
                   key={photo.id}
                   photo={photo}
-                  deletable={editable}
+                  editable={editable}
                   alt={group.owner.type === 'sample' ? t('capture.photos.alt', { label: group.owner.label, number: index + 1 }) : t('editing.photos.caseAlt', { number: index + 1 })}
                 />
               ))}

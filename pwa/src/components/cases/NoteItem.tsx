@@ -1,4 +1,4 @@
-import { useId, useState, type FormEvent } from 'react';
+import { useState } from 'react';
 import { IonButton, IonIcon } from '@ionic/react';
 import { createOutline } from 'ionicons/icons';
 import { useTranslation } from 'react-i18next';
@@ -9,24 +9,12 @@ import { recordDelete } from '../../features/sync/recordChange';
 import { formatDateTime } from '../../i18n/format';
 import { ConfirmDelete } from './ConfirmDelete';
 import { SyncBadge } from './SyncBadge';
+import { TextEditForm } from './TextEditForm';
 
 /** One site note: its time, text and sync state; on an open case, edited in place or deleted after asking. */
 export function NoteItem({ note, editable }: { note: NoteRow; editable: boolean }) {
   const { t, i18n } = useTranslation();
-  const [draft, setDraft] = useState<string>();
-  const [error, setError] = useState<string>();
-  const inputId = useId();
-
-  async function save(event: FormEvent) {
-    event.preventDefault();
-    try {
-      await editNote(captureDb(), note, draft ?? '');
-      setDraft(undefined);
-      setError(undefined);
-    } catch (failure) {
-      setError(failure instanceof Error ? failure.message : String(failure));
-    }
-  }
+  const [editing, setEditing] = useState(false);
 
   return (
     <li data-testid="site-note" data-note-id={note.id}>
@@ -34,33 +22,22 @@ export function NoteItem({ note, editable }: { note: NoteRow; editable: boolean 
         <time dateTime={note.data.recordedAt}>{formatDateTime(Date.parse(note.data.recordedAt), i18n.language)}</time>
         <SyncBadge state={note.sync} />
       </p>
-      {draft === undefined ? (
-        <p>{note.data.text}</p>
+      {editing ? (
+        <TextEditForm
+          label={t('editing.notes.editLabel')}
+          initial={note.data.text}
+          saveLabel={t('editing.notes.save')}
+          cancelLabel={t('editing.notes.cancel')}
+          onSave={(text) => editNote(captureDb(), note, text)}
+          onDone={() => setEditing(false)}
+        />
       ) : (
-        <form onSubmit={save} noValidate>
-          <div className="sb-field">
-            <label htmlFor={inputId}>{t('editing.notes.editLabel')}</label>
-            <textarea id={inputId} className="sb-text sb-text--area" rows={3} value={draft} onChange={(e) => setDraft(e.target.value)} />
-          </div>
-          {error && (
-            <p className="sb-error" role="alert">
-              {error}
-            </p>
-          )}
-          <div className="sb-button-row">
-            <IonButton type="submit" className="sb-primary">
-              {t('editing.notes.save')}
-            </IonButton>
-            <IonButton fill="outline" onClick={() => setDraft(undefined)}>
-              {t('editing.notes.cancel')}
-            </IonButton>
-          </div>
-        </form>
+        <p>{note.data.text}</p>
       )}
       {note.rejectedReason && <p className="sb-error">{t('capture.sync.rejected', { reason: note.rejectedReason })}</p>}
-      {editable && draft === undefined && (
+      {editable && !editing && (
         <div className="sb-button-row">
-          <IonButton fill="outline" data-testid="edit-note" onClick={() => setDraft(note.data.text)}>
+          <IonButton fill="outline" data-testid="edit-note" onClick={() => setEditing(true)}>
             <IonIcon icon={createOutline} slot="start" aria-hidden="true" />
             {t('editing.notes.edit')}
           </IonButton>

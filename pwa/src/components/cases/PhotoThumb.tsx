@@ -5,13 +5,14 @@ import type { PhotoRow } from '../../db/photosTable';
 import { captureDb } from '../../features/cases/captureDb';
 import { recordDelete } from '../../features/sync/recordChange';
 import { ConfirmDelete } from './ConfirmDelete';
+import { PhotoCaption } from './PhotoCaption';
 import { SyncBadge } from './SyncBadge';
 
 /**
- * One stored photo as a thumbnail (from the bytes on the tablet) with its sync state: a tap opens it
- * full size; on an open case it can be deleted after asking.
+ * One stored photo as a thumbnail (from the bytes on the tablet) with its caption and sync state: a tap
+ * opens it full size; on an open case its caption can be edited and it can be deleted after asking.
  */
-export function PhotoThumb({ photo, alt, deletable }: { photo: PhotoRow; alt: string; deletable: boolean }) {
+export function PhotoThumb({ photo, alt, editable }: { photo: PhotoRow; alt: string; editable: boolean }) {
   const { t } = useTranslation();
   const [url, setUrl] = useState<string>();
   const viewer = useRef<HTMLDialogElement>(null);
@@ -33,19 +34,21 @@ export function PhotoThumb({ photo, alt, deletable }: { photo: PhotoRow; alt: st
       {url && (
         <dialog ref={viewer} className="sb-photo-viewer" aria-label={alt} data-testid="photo-viewer">
           <img src={url} alt={alt} />
+          {photo.data.caption && <p>{photo.data.caption}</p>}
           <IonButton className="sb-primary" onClick={() => viewer.current?.close()}>
             {t('editing.photos.close')}
           </IonButton>
         </dialog>
       )}
       <figcaption>
+        <PhotoCaption photo={photo} alt={alt} editable={editable} />
         <SyncBadge state={photo.sync} />
         {photo.uploadRefused ? (
           <span className="sb-error">{t('capture.sync.fileRefused', { reason: photo.uploadRefused })}</span>
         ) : (
           photo.rejectedReason && <span className="sb-error">{t('capture.sync.rejected', { reason: photo.rejectedReason })}</span>
         )}
-        {deletable && <ConfirmDelete question={t('editing.photos.confirm')} testId="delete-photo" onDelete={() => recordDelete(captureDb(), 'attachment', photo.id)} />}
+        {editable && <ConfirmDelete question={t('editing.photos.confirm')} testId="delete-photo" onDelete={() => recordDelete(captureDb(), 'attachment', photo.id)} />}
       </figcaption>
     </figure>
   );

@@ -8,7 +8,7 @@ export const TABLET_FIELDS: Readonly<Record<CaptureEntity, readonly string[]>> =
   sample: ['caseId', 'label', 'container', 'description', 'locationOnSite', 'observations', 'collectedBy', 'collectedAt', 'sealNumber'],
   handover: ['sampleId', 'from', 'to', 'at', 'sealNumber', 'note'],
   note: ['caseId', 'sampleId', 'text', 'recordedAt'],
-  attachment: ['ownerType', 'ownerId', 'kind', 'fileName', 'contentType', 'size', 'sha256'],
+  attachment: ['ownerType', 'ownerId', 'kind', 'fileName', 'contentType', 'size', 'sha256', 'caption'],
   scan: ['sampleId', 'technique', 'phase', 'excitationNm', 'recordedAt', 'instrumentCheckId', 'rawAttachmentId', 'rawSha256', 'parsedSummary', 'result', 'inspectorAcknowledgedAt'],
   escalation: ['caseId', 'scanId', 'raisedAt', 'reason', 'hazardClasses'],
   instrumentCheck: ['caseId', 'standardId', 'performedAt', 'passed', 'offsets'],

@@ -3,7 +3,7 @@ import { openDb, type SitebandDb } from '../../db/db';
 import type { CaseData } from '../../db/casesTable';
 import { createApiClient, type ApiClient } from '../api/client';
 import { saveCase } from '../cases/saveCase';
-import { addPhoto } from '../photos/addPhoto';
+import { addPhoto, setPhotoCaption } from '../photos/addPhoto';
 import { saveSample } from '../samples/saveSample';
 import { mergePulled } from './mergePulled';
 import { nextBatch, pushOutbox } from './pushOutbox';
@@ -271,6 +271,44 @@ describe('merging a pull', () => {
 });
 
 describe('photos and the engine', () => {
+  it('sends a caption edit as a change of the metadata only: the bytes are uploaded once', async () => {
+    const d = await fresh();
+    const server = createTestServer();
+    const caseId = crypto.randomUUID();
+    await saveCase(d, caseId, caseData());
+    const bytes = new Uint8Array(5000).map((_, i) => (i * 13) % 251);
+    const photoId = await addPhoto(d, { caseId, ownerType: 'case', ownerId: caseId }, { fileName: 'gate.jpg', contentType: 'image/jpeg', bytes: bytes.buffer, caption: '  Gate B, padlock cut \n' });
+    const [added] = (await d.outbox.toArray()).filter((e) => e.id === photoId);
+    expect(added.data).toMatchObject({ kind: 'photo', caption: 'Gate B, padlock cut', sha256: expect.stringMatching(/^[0-9a-f]{64}$/) });
+    const sender = senderFor(server);
+    let puts = 0;
+    const counting: ByteSender = { put: (path, body, headers) => ((puts += 1), sender.put(path, body, headers)) };
+    const engine = createSyncEngine({ db: d, api: clientFor(server), sender: counting, clientId: 'tablet-test', schedule: () => () => undefined, backoff: { random: () => 0 } });
+    expect((await engine.syncNow()).failures).toBe(0);
+    expect(puts).toBe(1);
+    const uploaded = (await d.photos.get(photoId))!;
+    expect(uploaded).toMatchObject({ sync: 'server', version: 1, uploadedAt: expect.any(String) });
+
+    await setPhotoCaption(d, uploaded, 'Gate B, padlock cut; chain left on site');
+    const [edit] = await d.outbox.toArray();
+    expect(edit).toMatchObject({ entity: 'attachment', op: 'upsert', id: photoId, status: 'pending', data: { ...uploaded.data, caption: 'Gate B, padlock cut; chain left on site' } });
+    const edited = (await d.photos.get(photoId))!;
+    expect(edited).toMatchObject({ sync: 'local', uploadedAt: uploaded.uploadedAt, receivedBytes: uploaded.receivedBytes });
+    expect(new Uint8Array(edited.bytes!)).toEqual(bytes);
+    expect((await engine.syncNow()).failures).toBe(0);
+    expect(puts).toBe(1);
+    expect(server.records.get(photoId)?.record).toMatchObject({ version: 2, data: { caption: 'Gate B, padlock cut; chain left on site', sha256: uploaded.data.sha256 } });
+    expect(await everythingSynced(d)).toBe(true);
+
+    // An empty caption is none; one too long is refused on the tablet with the reason, and nothing is queued.
+    await setPhotoCaption(d, (await d.photos.get(photoId))!, '   ');
+    expect((await d.photos.get(photoId))?.data.caption).toBeNull();
+    await d.outbox.clear();
+    await expect(setPhotoCaption(d, (await d.photos.get(photoId))!, 'x'.repeat(501))).rejects.toThrow('caption must be at most 500 characters; this one has 501');
+    expect(await d.outbox.count()).toBe(0);
+    expect((await d.photos.get(photoId))?.data.caption).toBeNull();
+  }, 60_000);
+
   it('uploads photo bytes in chunks, resumes from the server offset, and the hash matches', async () => {
     const d = await fresh();
     const server = createTestServer();

@@ -115,7 +115,11 @@ export function createTestServer({ rejectIf, maxPushChars = Infinity, maxFileByt
       const meta = records.get(id)?.record.data as { size: number; sha256: string } | undefined;
       if (!meta) return json({ message: 'No such attachment' }, 404);
       const have = uploads.get(id) ?? new Uint8Array(0);
-      const status = async () => ({ id, size: meta.size, receivedBytes: have.length, complete: have.length === meta.size && (await sha256Hex(have)) === meta.sha256, sha256: meta.sha256, uploadedAt: have.length === meta.size ? '2026-01-01T00:00:01.000Z' : null });
+      // Read at answer time: after a chunk, the answer tells what the server holds with it.
+      const status = async () => {
+        const held = uploads.get(id) ?? new Uint8Array(0);
+        return { id, size: meta.size, receivedBytes: held.length, complete: held.length === meta.size && (await sha256Hex(held)) === meta.sha256, sha256: meta.sha256, uploadedAt: held.length === meta.size ? '2026-01-01T00:00:01.000Z' : null };
+      };
       if (content[2] === 'status') return json(await status());
       if (meta.size > maxFileBytes) return json({ statusCode: 413, error: 'Payload Too Large', message: `The file is larger than ${maxFileBytes} bytes` }, 413);
       const range = String((init.headers as Record<string, string>)['Content-Range']).match(/^bytes (\d+)-(\d+)\/(\d+)$/);
