@@ -262,6 +262,29 @@ describe('Server recomputation of synced scans (e2e, MariaDB + S3 fake)', () => 
     expect(changed.serverResult).toEqual(computed);
   });
 
+  it('recomputes a scan whose phase was changed and identified again on the tablet, and agrees with it', async () => {
+    const scanId = await scanThenUpload(computed);
+    const first = await scanView(scanId);
+    expect(first.resultMismatch).toBe(false);
+    const base = { rawAttachmentId: first.rawAttachmentId, rawSha256: first.rawSha256 };
+    // The tablet's edit: gas phase, the identification run again from the same raw file, acknowledged anew.
+    const gas = tabletResult({ phase: 'gas' });
+    const [edit] = await push(t, inspector, [upsert('scan', scanId, irScan({ ...base, phase: 'gas', result: gas, inspectorAcknowledgedAt: '2026-11-30T10:05:00.000Z' }), 1)]);
+    expect(edit).toMatchObject({ status: 'applied', version: 2 });
+    const edited = await scanView(scanId);
+    expect(edited.serverRecomputedAt).not.toBe(first.serverRecomputedAt);
+    expect(edited.serverRecomputeError).toBeNull();
+    expect(edited.serverResult).toEqual(gas);
+    expect(edited.resultMismatch).toBe(false);
+    expect(edited.mismatch).toMatchObject({ parametersFrom: 'tablet', differences: [] });
+
+    // A phase changed without identifying again leaves a result the server cannot reproduce as the scan now says: named, not a mismatch.
+    await push(t, inspector, [upsert('scan', scanId, irScan({ ...base, phase: 'condensed', result: gas }), 2)]);
+    const stale = await scanView(scanId);
+    expect(stale.resultMismatch).toBeNull();
+    expect(stale.serverRecomputeError).toMatch(/^Cannot reproduce the tablet's processing: .*phase/);
+  });
+
   it('records an unreadable raw file on the scan while the push is answered 200', async () => {
     const bytes = Buffer.from('this file holds no spectrum at all\n');
     const scanId = randomUUID();

@@ -14,6 +14,7 @@ import { inviteTests } from './invite.mjs';
 import { idleLockTests } from './idleLock.mjs';
 import { libraryTests } from './library.mjs';
 import { reviewTests } from './review.mjs';
+import { scanEditTests } from './scanEdits.mjs';
 import { shareTargetTests } from './shareTarget.mjs';
 import { threeRoleTests } from './three-roles.mjs';
 import {
@@ -301,6 +302,7 @@ libraryTests({ baseUrl: BASE_URL, password: PASSWORD });
 captureTests({ baseUrl: BASE_URL, password: PASSWORD });
 caseArchiveTests({ baseUrl: BASE_URL, password: PASSWORD });
 editingTests({ baseUrl: BASE_URL, password: PASSWORD });
+scanEditTests({ baseUrl: BASE_URL, password: PASSWORD });
 escalationTests({ baseUrl: BASE_URL, password: PASSWORD });
 adminTests({ baseUrl: BASE_URL, password: PASSWORD });
 inviteTests({ baseUrl: BASE_URL, password: PASSWORD });

@@ -11,6 +11,7 @@ import review from './en/review.json';
 import share from './en/share.json';
 import editing from './en/editing.json';
 import captions from './en/captions.json';
+import scanEdit from './en/scanEdit.json';
 
 /**
  * Adds the strings of the signed-in screens to the translation resources. The signed-in area
@@ -18,5 +19,5 @@ import captions from './en/captions.json';
  * first paint; the sign-in and lock screens' strings are in initI18n.
  */
 export function addSignedInStrings(): void {
-  i18next.addResourceBundle('en', 'translation', { identify, library, capture, events, escalations, caseOutcome, audit, review, caseArchive, share, editing, captions }, true, false);
+  i18next.addResourceBundle('en', 'translation', { identify, library, capture, events, escalations, caseOutcome, audit, review, caseArchive, share, editing, captions, scanEdit }, true, false);
 }

@@ -1,10 +1,10 @@
 import { useEffect, useState, type ReactNode } from 'react';
-import { IonSpinner } from '@ionic/react';
 import { useTranslation } from 'react-i18next';
 import type { IdentifyResult } from '@siteband/shared';
 import { LaserCaution } from '../components/caution/LaserCaution';
 import { PageShell } from '../components/PageShell';
 import { InstrumentCheckStatus } from '../components/spectrum/InstrumentCheckStatus';
+import { IdentificationStatus } from '../components/spectrum/IdentificationStatus';
 import { ScanFilePicker } from '../components/spectrum/ScanFilePicker';
 import { ScanResultPanel } from '../components/spectrum/ScanResultPanel';
 import { ScanSettingsForm } from '../components/spectrum/ScanSettingsForm';
@@ -13,7 +13,7 @@ import { identifyClient } from '../features/identify/identifyWorker';
 import type { IdentifyOutcome, ScanFile } from '../features/identify/protocol';
 import { DEFAULT_SCAN_SETTINGS, type ScanSettings } from '../features/identify/scanSettings';
 import { useScanIdentification } from '../features/identify/useScanIdentification';
-import { useLibrary } from '../features/library/useLibrary';
+import { useLibraryInForce } from '../features/library/useLibrary';
 
 /** A result the inspector acknowledged, with everything needed to save it to a sample. */
 export interface AcknowledgedScan {
@@ -39,9 +39,8 @@ export function ScanCapture({
 }) {
   const { t } = useTranslation();
   const [scan, setScan] = useState<ScanSettings>(DEFAULT_SCAN_SETTINGS);
-  const library = useLibrary().data;
   // Rank against the library in force (supervisors' edits) once the tablet has received it.
-  const { state, processing, setProcessing, chooseFile, file } = useScanIdentification(identifyClient, scan, library?.source === 'bundled' ? undefined : library?.library);
+  const { state, processing, setProcessing, chooseFile, file } = useScanIdentification(identifyClient, scan, useLibraryInForce());
   const [acknowledged, setAcknowledged] = useState<{ result: IdentifyResult; at: string } | null>(null);
   // Start the worker as the screen opens, so the library indices are built before the first file.
   useEffect(() => {
@@ -71,25 +70,7 @@ export function ScanCapture({
           {t('identify.scan.importHeading')}
         </h2>
         <ScanFilePicker label={t('identify.file.label')} hint={t('identify.file.hint')} onFile={chooseFile} testId="scan-file" />
-        {state.status === 'running' && (
-          <p className="sb-notice" role="status">
-            <IonSpinner name="crescent" aria-hidden="true" /> {t('identify.scan.running', { file: state.fileName })}
-          </p>
-        )}
-        {state.status === 'failed' && (
-          <div className="sb-error" role="alert" data-testid="scan-error">
-            <p>
-              <strong>{t('identify.scan.failed', { file: state.fileName })}</strong>
-            </p>
-            <p>{state.message}</p>
-            <p>{t('identify.scan.failedHint')}</p>
-          </div>
-        )}
-        {state.status === 'done' && (
-          <p className="sb-muted" role="status">
-            {t('identify.scan.done', { file: state.fileName })}
-          </p>
-        )}
+        <IdentificationStatus state={state} />
       </section>
 
       {outcome && (

@@ -1,5 +1,6 @@
 import { useTranslation } from 'react-i18next';
 import { SyncBadge } from '../components/cases/SyncBadge';
+import { ScanEditPanel } from '../components/spectrum/ScanEditPanel';
 import { ServerCheckView } from '../components/spectrum/ServerCheckView';
 import type { EscalationRow } from '../db/escalationsTable';
 import type { PhotoRow } from '../db/photosTable';
@@ -8,8 +9,8 @@ import { formatAgreement } from '../features/identify/format';
 import { storedCandidates, storedVerdict } from '../features/scans/storedResult';
 import { formatDateTime } from '../i18n/format';
 
-/** A saved scan as stored on the tablet: how it was taken, its raw file, its likely compounds, escalation and the server's check. */
-export function SampleScanDetail({ scan, raw, escalations }: { scan: ScanRow; raw: PhotoRow | null; escalations: EscalationRow[] }) {
+/** A saved scan as stored on the tablet: how it was taken (corrected in place on an open case), its raw file, its likely compounds, escalation and the server's check. */
+export function SampleScanDetail({ scan, raw, escalations, editable }: { scan: ScanRow; raw: PhotoRow | null; escalations: EscalationRow[]; editable: boolean }) {
   const { t, i18n } = useTranslation();
   const { data } = scan;
   const candidates = storedCandidates(data.result).slice(0, 5);
@@ -57,6 +58,8 @@ export function SampleScanDetail({ scan, raw, escalations }: { scan: ScanRow; ra
           </p>
         )}
       </section>
+
+      {editable && <ScanEditPanel scan={scan} raw={raw} />}
 
       <section className="sb-panel" aria-labelledby="scan-likely-heading">
         <h2 id="scan-likely-heading" className="sb-panel__heading">

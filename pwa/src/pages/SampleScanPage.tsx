@@ -33,7 +33,7 @@ function SavedScan({ scanId, editable, backTo }: { scanId: string; editable: boo
   }
   return (
     <>
-      <SampleScanDetail {...record} />
+      <SampleScanDetail {...record} editable={editable} />
       {editable && (
         <DeleteHeldRecord
           entity="scan"

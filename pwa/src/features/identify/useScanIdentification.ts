@@ -39,8 +39,9 @@ export function useScanIdentification(client: () => IdentifyClient, scan: ScanSe
       );
   }, [client, file, scan, processing, libraryHash]);
 
-  const chooseFile = useCallback((next: ScanFile) => {
-    setProcessing(DEFAULT_PROCESSING);
+  /** A new file starts from the pipeline's defaults, or from the processing given (a saved scan's, run again). */
+  const chooseFile = useCallback((next: ScanFile, startFrom: ProcessingSettings = DEFAULT_PROCESSING) => {
+    setProcessing(startFrom);
     setFile(next);
   }, []);
 

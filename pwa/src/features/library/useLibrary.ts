@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Compound } from '@siteband/shared';
+import type { Compound, Library } from '@siteband/shared';
 import { useApiClient } from '../api/ApiClientContext';
 import type { ApiClient } from '../api/client';
 import { useOnlineStatus } from '../network/onlineStatus';
@@ -23,6 +23,12 @@ export function useLibrary() {
   const client = useApiClient();
   const online = useOnlineStatus();
   return useQuery(libraryQuery(client, online));
+}
+
+/** The library in force as the tablet last received it, to rank scans against; undefined while only the bundled one is at hand (the worker holds that). */
+export function useLibraryInForce(): Library | undefined {
+  const library = useLibrary().data;
+  return library?.source === 'bundled' ? undefined : library?.library;
 }
 
 /** One compound of the library in use (undefined while loading or when the id is unknown). */

@@ -7,13 +7,14 @@ import { createApiClient } from '../api/client';
 import { saveCase } from '../cases/saveCase';
 import { handleRequest } from '../identify/handleRequest';
 import type { IdentifyOutcome, ScanFile } from '../identify/protocol';
-import { DEFAULT_PROCESSING, DEFAULT_SCAN_SETTINGS, type ScanSettings } from '../identify/scanSettings';
+import { DEFAULT_PROCESSING, DEFAULT_SCAN_SETTINGS, type ProcessingSettings, type ScanSettings } from '../identify/scanSettings';
 import { fixtureScan } from '../identify/testFixtures';
 import { saveSample } from '../samples/saveSample';
 import { mergePulled } from '../sync/mergePulled';
 import { createSyncEngine } from '../sync/syncEngine';
 import { everythingSynced } from '../sync/syncState';
 import { createTestServer } from '../sync/testServer';
+import { identificationChanged, processingSettingsOf, saveScanEdit, scanSettingsOf, storedRawFile } from './editScan';
 import { saveScan, type NewScan } from './saveScan';
 
 let db: SitebandDb | undefined;
@@ -25,8 +26,9 @@ afterEach(async () => {
 const raman: ScanSettings = { ...DEFAULT_SCAN_SETTINGS, technique: 'raman', atr: false, excitationNm: 785 };
 const ir: ScanSettings = DEFAULT_SCAN_SETTINGS;
 
-function identify(file: ScanFile, scan: ScanSettings): IdentifyOutcome {
-  const response = handleRequest({ id: 1, kind: 'identify', file, scan, processing: DEFAULT_PROCESSING });
+/** The worker's own handler, as the capture screen and the scan edit run it. */
+function identify(file: ScanFile, scan: ScanSettings, processing: ProcessingSettings = DEFAULT_PROCESSING): IdentifyOutcome {
+  const response = handleRequest({ id: 1, kind: 'identify', file, scan, processing });
   if (!response.ok || response.kind !== 'identify') throw new Error(`expected an identify answer, got ${JSON.stringify(response)}`);
   return response.outcome;
 }
@@ -150,4 +152,85 @@ describe('saving a scan', () => {
     expect(await mergePulled(d, recomputed)).toBe('same');
     expect((await d.scans.get(saved.scanId))?.serverCheck).toEqual({ resultMismatch: false, serverRecomputedAt: '2026-04-01T08:00:00.000Z', serverRecomputeError: null, differences: [] });
   }, 60_000);
+});
+
+describe('changing a saved scan', () => {
+  /** A saved scan, with its raw file as the tablet keeps it, and the outbox emptied as if it had synced. */
+  async function savedScan(name: string, settings: ScanSettings) {
+    const { d, caseId, sampleId } = await withSample();
+    const saved = await saveScan(d, newScan(caseId, sampleId, fixtureScan(name), settings));
+    await d.outbox.clear();
+    const scan = (await d.scans.get(saved.scanId))!;
+    const raw = (await d.photos.get(saved.attachmentId))!;
+    return { d, caseId, saved, scan, raw, rawBefore: new Uint8Array(raw.bytes!).slice() };
+  }
+
+  it('re-runs the identification from the stored raw file with the new phase and stores the new result, acknowledged anew', async () => {
+    const { d, saved, scan, raw, rawBefore } = await savedScan('synthetic-ir-ethanol-liquid.csv', ir);
+    const settings = { ...scanSettingsOf(scan.data), phase: 'gas' as const };
+    expect(scanSettingsOf(scan.data)).toEqual(ir);
+    expect(identificationChanged(scan.data, settings)).toBe(true);
+    expect(identificationChanged(scan.data, { ...ir, excitationNm: 1064 })).toBe(false);
+    await expect(saveScanEdit(d, { scan, settings, reidentified: null, check: 'keep' })).rejects.toThrow(/must run again from the raw file/);
+    expect(await d.outbox.count()).toBe(0);
+
+    const processing = processingSettingsOf(scan.data, settings.technique);
+    expect(processing.baselineLambda).toBe((scan.data.result.processing as { baseline: { lambda: number } }).baseline.lambda);
+    const outcome = identify(storedRawFile(raw)!, settings, processing);
+    expect(outcome.result.phase).toBe('gas');
+    await saveScanEdit(d, { scan, settings, reidentified: { outcome, acknowledgedAt: '2026-04-01T09:00:00.000Z' }, check: 'keep' });
+
+    const after = (await d.scans.get(saved.scanId))!;
+    expect(after.data).toMatchObject({ technique: 'ir', phase: 'gas', excitationNm: null, recordedAt: scan.data.recordedAt, rawSha256: scan.data.rawSha256, rawAttachmentId: raw.id, inspectorAcknowledgedAt: '2026-04-01T09:00:00.000Z' });
+    const result = after.data.result as { phase: string; processing: { phase: string; technique: string }; codeVersion: string };
+    expect(result.phase).toBe('gas');
+    expect(result.processing).toMatchObject({ technique: 'ir', phase: 'gas' });
+    expect(result.codeVersion).toBe(outcome.result.parameters.methodVersion);
+    // The raw file is kept byte for byte and not queued again.
+    const rawAfter = (await d.photos.get(raw.id))!;
+    expect(new Uint8Array(rawAfter.bytes!)).toEqual(rawBefore);
+    expect(rawAfter.data).toEqual(raw.data);
+    const outbox = await d.outbox.toArray();
+    expect(outbox.map((e) => [e.entity, e.id, e.op, e.status])).toEqual([['scan', saved.scanId, 'upsert', 'pending']]);
+    expect(outbox[0].data).toEqual(after.data);
+  });
+
+  it('keeps the old values when the raw file cannot be read as the new technique', async () => {
+    const { d, saved, scan, raw } = await savedScan('synthetic-ir-ethanol-liquid.csv', ir);
+    const response = handleRequest({ id: 2, kind: 'identify', file: storedRawFile(raw)!, scan: raman, processing: processingSettingsOf(scan.data, 'raman') });
+    expect(response).toMatchObject({ ok: false, error: { code: 'import' } });
+    expect(!response.ok && response.error.message).toMatch(/IR/);
+    expect(processingSettingsOf(scan.data, 'raman')).toEqual(DEFAULT_PROCESSING);
+    expect((await d.scans.get(saved.scanId))!.data).toEqual(scan.data);
+    expect(await d.outbox.count()).toBe(0);
+  });
+
+  it('raises an escalation when the new result requires one, once, by the capture rule', async () => {
+    const { d, caseId, saved, scan, raw } = await savedScan('synthetic-raman-ammonium-nitrate-785.csv', { ...raman, phase: 'gas' });
+    expect(saved.escalationId).toBeNull();
+    const condensed = identify(storedRawFile(raw)!, raman);
+    expect(condensed.result.escalation.required).toBe(true);
+    const first = await saveScanEdit(d, { scan, settings: raman, reidentified: { outcome: condensed, acknowledgedAt: '2026-04-01T09:10:00.000Z' }, check: 'keep' });
+    expect(first.escalationId).not.toBeNull();
+    expect((await d.escalations.get(first.escalationId!))?.data).toMatchObject({ caseId, scanId: saved.scanId, raisedAt: '2026-04-01T09:10:00.000Z' });
+    const order = (await d.outbox.orderBy('seq').toArray()).map((e) => e.entity);
+    expect(order).toEqual(['scan', 'escalation']);
+    // Edited again with the same finding: the escalation already raised stands, no second one.
+    const again = await saveScanEdit(d, { scan: (await d.scans.get(saved.scanId))!, settings: raman, reidentified: { outcome: condensed, acknowledgedAt: '2026-04-01T09:20:00.000Z' }, check: 'keep' });
+    expect(again.escalationId).toBeNull();
+    expect(await d.escalations.count()).toBe(1);
+  });
+
+  it('changes the instrument check alone without running the identification again', async () => {
+    const { d, saved, scan } = await savedScan('synthetic-ir-ethanol-liquid.csv', ir);
+    const check: InstrumentCheckRow = {
+      id: 9, technique: 'ir', standardId: 'ir-polystyrene-ep-ft', standardName: 'Polystyrene film', pass: true, reason: 'all bands in tolerance', fileName: 'ps.csv', checkedAt: Date.parse('2026-04-01T06:55:00.000Z'),
+      bands: [{ expectedCm1: 1601.2, foundCm1: 1601.4, offsetCm1: 0.2, toleranceCm1: 1, toleranceSource: 'synthetic test value', status: 'pass' }],
+    };
+    const { instrumentCheckId } = await saveScanEdit(d, { scan, settings: scanSettingsOf(scan.data), reidentified: null, check });
+    const after = (await d.scans.get(saved.scanId))!;
+    expect(after.data).toEqual({ ...scan.data, instrumentCheckId });
+    expect(instrumentCheckId).not.toBeNull();
+    expect((await d.outbox.orderBy('seq').toArray()).map((e) => e.entity)).toEqual(['instrumentCheck', 'scan']);
+  });
 });

@@ -32,8 +32,8 @@ export interface SavedScan {
   readonly instrumentCheckId: string | null;
 }
 
-/** The case's copy of a local check, created on first use so the server can link the scan to it. */
-async function caseCheckId(db: SitebandDb, caseId: string, check: InstrumentCheckRow | null, now: number): Promise<string | null> {
+/** The case's copy of a local check, created on first use so the server can link the scan to it. Call inside a capture transaction. */
+export async function caseCheckId(db: SitebandDb, caseId: string, check: InstrumentCheckRow | null, now: number): Promise<string | null> {
   if (!check?.pass || check.id === undefined) return null;
   const existing = await db.caseChecks.where('caseId').equals(caseId).filter((row) => row.localCheckId === check.id).first();
   if (existing) return existing.id;
@@ -49,6 +49,13 @@ async function caseCheckId(db: SitebandDb, caseId: string, check: InstrumentChec
   return id;
 }
 
+/** Refuses to store a result computed with other settings than the ones saved with it. */
+export function assertOutcomeOf(outcome: IdentifyOutcome, settings: ScanSettings): void {
+  if (outcome.result.technique !== settings.technique || outcome.result.phase !== settings.phase) {
+    throw new TypeError('The result on screen was computed with other scan settings; wait for the new result before saving');
+  }
+}
+
 /**
  * Saves an acknowledged scan with its raw file, its result and, when the result requires it, the
  * escalation. All of them and their changes go in ONE transaction: a scan without its raw file
@@ -58,9 +65,7 @@ async function caseCheckId(db: SitebandDb, caseId: string, check: InstrumentChec
 export async function saveScan(db: SitebandDb, scan: NewScan, now = Date.now()): Promise<SavedScan> {
   const { file, outcome, settings } = scan;
   checkRawScanFile(file.name, file.bytes);
-  if (outcome.result.technique !== settings.technique || outcome.result.phase !== settings.phase) {
-    throw new TypeError('The result on screen was computed with other scan settings; wait for the new result before saving');
-  }
+  assertOutcomeOf(outcome, settings);
   // Hashed before the transaction: IndexedDB commits a transaction that waits on anything else.
   const sha256 = await sha256Hex(file.bytes);
   const scanId = crypto.randomUUID();

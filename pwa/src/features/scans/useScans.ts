@@ -1,5 +1,6 @@
 import { useLiveQuery } from 'dexie-react-hooks';
 import { isLive, liveOrNull } from '../../db/captureRecord';
+import type { CaseCheckRow } from '../../db/caseChecksTable';
 import type { EscalationRow } from '../../db/escalationsTable';
 import type { PhotoRow } from '../../db/photosTable';
 import type { ScanRow } from '../../db/scansTable';
@@ -23,4 +24,9 @@ export function useScanRecord(scanId: string): { scan: ScanRow; raw: PhotoRow | 
     const escalations = await db.escalations.filter((e) => e.data.scanId === scanId).toArray();
     return { scan, raw, escalations };
   }, [scanId]);
+}
+
+/** Live: a case's copy of an instrument check (what a scan links to); null when there is none. */
+export function useCaseCheck(id: string | null): CaseCheckRow | null | undefined {
+  return useLiveQuery(async () => (id ? ((await captureDb().caseChecks.get(id)) ?? null) : null), [id]);
 }

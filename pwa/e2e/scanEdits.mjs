@@ -1,0 +1,189 @@
+// Browser end-to-end test of correcting a saved scan and captioning photos offline: the scan's phase is
+// changed, its likely compounds are found again from the stored raw file and acknowledged anew; a photo
+// gets a caption when taken and another one later; everything survives a reload offline and reaches the
+// server with the next sync, which agrees with the tablet's new result. Registered in run.mjs.
+// The site, sample and captions are an invented demo scenario.
+import assert from 'node:assert/strict';
+import { readFileSync } from 'node:fs';
+import { dirname, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { after, before, describe, it } from 'node:test';
+import { blockingViolations } from './axe.mjs';
+import { openBrowser, screenshot } from './browser.mjs';
+import { gradientPng, readCapture, waitForSynced } from './capture.mjs';
+import { apiToken, goOffline, signInTo, waitForPage } from './shell.mjs';
+
+const SPECTRA = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'fixtures', 'spectra');
+const FIXTURE = 'synthetic-ir-ethanol-liquid.csv';
+const SITE = `Tannery yard drum store (e2e ${Date.now() % 100000})`;
+const FIRST_CAPTION = 'Drum label, north side';
+const SECOND_CAPTION = 'Drum label, north side: UN 1170 stencilled, bung loose';
+
+async function assertAccessible(page, where) {
+  assert.deepEqual(await blockingViolations(page), [], `axe found serious or critical problems on ${where}`);
+}
+
+export function scanEditTests({ baseUrl, password }) {
+  async function caseOnServer(token, caseId) {
+    const response = await fetch(`${baseUrl}/api/cases/${caseId}`, { headers: { Authorization: `Bearer ${token}` } });
+    assert.equal(response.status, 200);
+    return response.json();
+  }
+
+  describe('correcting a saved scan and captioning photos offline', { concurrency: false }, () => {
+    let browser;
+    let token;
+    let caseId;
+    let sampleId;
+    let scanUrl;
+    let scanId;
+    let photoId;
+    let firstAcknowledgedAt;
+    before(async () => {
+      browser = await openBrowser({ origin: baseUrl, width: 800, height: 1280 });
+      token = await apiToken(baseUrl, 'inspector@demo.test', password);
+    });
+    after(async () => {
+      await browser?.close();
+    });
+
+    it('records a sample with a captioned photo and an acknowledged IR scan, and syncs them', async () => {
+      const { page } = browser;
+      await signInTo(page, baseUrl, 'inspector@demo.test', password, 'Cases');
+      await page.getByTestId('new-case').filter({ visible: true }).click();
+      await waitForPage(page, 'New case');
+      await page.getByLabel('Site name', { exact: true }).fill(SITE);
+      await page.getByRole('button', { name: 'Save case' }).filter({ visible: true }).click();
+      await waitForPage(page, SITE);
+      caseId = page.url().split('/').pop();
+      await page.getByTestId('new-sample').filter({ visible: true }).click();
+      await waitForPage(page, 'New sample');
+      await page.getByLabel('Label', { exact: true }).filter({ visible: true }).fill('TY-01');
+      await page.getByRole('button', { name: 'Save sample' }).filter({ visible: true }).click();
+      await waitForPage(page, 'Sample TY-01');
+      sampleId = page.url().split('/').pop();
+
+      await page.getByLabel('Caption for the photos you take now (optional)').filter({ visible: true }).fill(FIRST_CAPTION);
+      await page.getByTestId('photo-input').filter({ visible: true }).setInputFiles({ name: 'drum.png', mimeType: 'image/png', buffer: gradientPng(320, 240, 60) });
+      const photo = page.getByTestId('photo').filter({ visible: true }).first();
+      await photo.getByTestId('photo-caption').filter({ hasText: FIRST_CAPTION }).waitFor();
+      photoId = await photo.getAttribute('data-photo-id');
+      assert.equal(await page.getByLabel('Caption for the photos you take now (optional)').filter({ visible: true }).inputValue(), '', 'the caption went with the photo');
+
+      await page.getByTestId('add-scan').filter({ visible: true }).click();
+      await waitForPage(page, 'New scan of TY-01');
+      await page.getByTestId('scan-file').last().setInputFiles({ name: FIXTURE, mimeType: 'text/csv', buffer: readFileSync(join(SPECTRA, FIXTURE)) });
+      await page.getByTestId('candidate-ethanol').last().waitFor({ timeout: 30_000 });
+      await page.getByLabel(/I have read the caution cards/).check();
+      await page.getByRole('button', { name: 'Acknowledge and mark reviewed by inspector' }).last().click();
+      await page.getByTestId('save-scan').last().click();
+      await waitForPage(page, 'Scan of TY-01');
+      scanUrl = page.url();
+      scanId = scanUrl.split('/').pop();
+      await page.goto(`${baseUrl}/tabs/cases/${caseId}`);
+      await waitForPage(page, SITE);
+      await page.getByTestId('sync-now').filter({ visible: true }).click();
+      const local = await waitForSynced(page);
+      firstAcknowledgedAt = local.scans.find((s) => s.id === scanId).data.inspectorAcknowledgedAt;
+      const detail = await caseOnServer(token, caseId);
+      assert.equal(detail.attachments.find((a) => a.id === photoId)?.caption, FIRST_CAPTION);
+      assert.deepEqual([detail.scans[0].phase, detail.scans[0].version], ['condensed', 1]);
+    });
+
+    it('offline: refuses to read the IR file as Raman, then re-runs the identification under the gas phase and asks for the acknowledgement again', async () => {
+      const { page, context } = browser;
+      await goOffline(page, context);
+      await page.goto(scanUrl);
+      await waitForPage(page, 'Scan of TY-01');
+      const edit = page.getByTestId('scan-edit').filter({ visible: true });
+      await edit.getByTestId('edit-scan').click();
+
+      // The file's own axis says IR: relabelled Raman it is refused, and the saved values stay.
+      await edit.getByLabel('Raman', { exact: true }).check();
+      const refusal = edit.getByTestId('scan-error');
+      await refusal.waitFor({ timeout: 30_000 });
+      assert.match(await refusal.textContent(), /IR/);
+      assert.match(await refusal.textContent(), /The saved scan is unchanged/);
+      assert.equal(await edit.getByRole('button', { name: 'Save the corrected scan' }).isDisabled(), true);
+      await assertAccessible(page, 'a scan correction the raw file refuses');
+      await edit.getByLabel('IR', { exact: true }).check();
+
+      await edit.getByLabel('Gas cell', { exact: true }).check();
+      await edit.getByText('The settings changed: the likely compounds below are found again from the raw file.').waitFor();
+      const acknowledge = edit.getByLabel(/I have read the caution cards/);
+      await acknowledge.waitFor({ timeout: 30_000 });
+      await edit.getByText('Identified from synthetic-ir-ethanol-liquid.csv.').waitFor({ timeout: 30_000 });
+      assert.equal(await edit.getByRole('button', { name: 'Save the corrected scan' }).isDisabled(), true, 'nothing to save before the new result is acknowledged');
+      await edit.getByText('Acknowledge the caution cards of the new result above before saving.').waitFor();
+      await assertAccessible(page, 'a scan correction with its new result');
+      await screenshot(page, 'scan-edit-new-result-800x1280');
+      await acknowledge.check();
+      await edit.getByRole('button', { name: 'Acknowledge and mark reviewed by inspector' }).click();
+      await edit.getByTestId('save-scan-edit').click();
+      await edit.getByText(/^Saved\./).waitFor();
+      assert.equal(await page.getByTestId('scan-sync').filter({ visible: true }).textContent(), 'Local only');
+
+      const local = await page.evaluate(readCapture);
+      const scan = local.scans.find((s) => s.id === scanId);
+      assert.deepEqual([scan.data.technique, scan.data.phase, scan.data.result.phase, scan.data.result.processing.phase], ['ir', 'gas', 'gas', 'gas']);
+      assert.notEqual(scan.data.inspectorAcknowledgedAt, firstAcknowledgedAt);
+      assert.ok(scan.data.inspectorAcknowledgedAt);
+    });
+
+    it('offline: changes a photo caption, and keeps both edits over a reload', async () => {
+      const { page } = browser;
+      await page.goto(`${baseUrl}/tabs/cases/${caseId}/samples/${sampleId}`);
+      await waitForPage(page, 'Sample TY-01');
+      const photo = page.locator(`[data-photo-id="${photoId}"]`).filter({ visible: true });
+      await photo.getByTestId('edit-photo-caption').click();
+      const field = photo.getByLabel('Caption of Photo 1 of sample TY-01');
+      assert.equal(await field.inputValue(), FIRST_CAPTION);
+      await field.fill('x'.repeat(501));
+      await photo.getByRole('button', { name: 'Save caption' }).click();
+      await photo.getByRole('alert').filter({ hasText: 'caption must be at most 500 characters; this one has 501' }).waitFor();
+      await assertAccessible(page, 'a caption refused as too long');
+      await field.fill(SECOND_CAPTION);
+      await photo.getByRole('button', { name: 'Save caption' }).click();
+      await photo.getByTestId('photo-caption').filter({ hasText: SECOND_CAPTION }).waitFor();
+      await assertAccessible(page, 'the sample page with a captioned photo');
+      await screenshot(page, 'photo-caption-edited-800x1280');
+
+      await page.reload();
+      await waitForPage(page, 'Sample TY-01');
+      await page.locator(`[data-photo-id="${photoId}"]`).filter({ visible: true }).getByTestId('photo-caption').filter({ hasText: SECOND_CAPTION }).waitFor();
+      await page.goto(scanUrl);
+      await waitForPage(page, 'Scan of TY-01');
+      const local = await page.evaluate(readCapture);
+      assert.deepEqual(local.outbox.map((e) => [e.entity, e.id]).sort(), [['attachment', photoId], ['scan', scanId]].sort());
+      assert.equal(local.photos.find((p) => p.id === photoId).uploadedAt !== null, true, 'the photo stays uploaded');
+    });
+
+    it('syncs: the server has the new phase, result and caption, sent no photo bytes again, and agrees with the new result', async () => {
+      const { page, context } = browser;
+      await context.setOffline(false);
+      await page.getByTestId('connection-status').filter({ visible: true }).filter({ hasText: 'Online' }).waitFor();
+      const uploads = [];
+      page.on('request', (request) => {
+        if (request.method() === 'PUT' && request.url().includes('/content')) uploads.push(request.url());
+      });
+      await page.goto(`${baseUrl}/tabs/cases/${caseId}`);
+      await waitForPage(page, SITE);
+      await page.getByTestId('sync-now').filter({ visible: true }).click();
+      await waitForSynced(page);
+      assert.deepEqual(uploads, [], 'no file is uploaded again for a caption or a scan correction');
+
+      let detail;
+      for (let attempt = 0; attempt < 150; attempt += 1) {
+        detail = await caseOnServer(token, caseId);
+        if (detail.scans[0]?.serverRecomputedAt || detail.scans[0]?.serverRecomputeError) break;
+        await page.waitForTimeout(200);
+      }
+      const scan = detail.scans[0];
+      assert.deepEqual([scan.phase, scan.version, scan.result.phase], ['gas', 2, 'gas']);
+      assert.equal(scan.serverRecomputeError, null);
+      assert.equal(scan.resultMismatch, false);
+      const photo = detail.attachments.find((a) => a.id === photoId);
+      assert.deepEqual([photo.caption, photo.version, photo.receivedBytes === photo.size], [SECOND_CAPTION, 2, true]);
+    });
+  });
+}
