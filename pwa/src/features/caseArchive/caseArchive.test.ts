@@ -31,7 +31,7 @@ async function fieldDay(db: SitebandDb): Promise<string> {
     locationEnteredByHand: false, startedAt: '2026-11-30T08:15:00.000Z', weatherNotes: null, accessNotes: null, status: 'open',
   });
   await saveSample(db, sampleId, { caseId, label: 'S-01', container: null, description: null, locationOnSite: null, observations: {}, collectedBy: 'R. Ashdown', collectedAt: '2026-11-30T08:40:00.000Z', sealNumber: null });
-  return addPhoto(db, { caseId, ownerType: 'sample', ownerId: sampleId }, { fileName: 'bay3.jpg', contentType: 'image/jpeg', bytes: photoBytes });
+  return addPhoto(db, { caseId, ownerType: 'sample', ownerId: sampleId }, { fileName: 'bay3.jpg', contentType: 'image/jpeg', bytes: photoBytes, caption: 'Split sack, bay 3' });
 }
 
 describe('case archives on the tablet', () => {
@@ -58,6 +58,7 @@ describe('case archives on the tablet', () => {
     expect(first.ok && first.records.map((r) => r.outcome)).toEqual(['imported', 'imported', 'imported']);
     expect((await b.outbox.toArray()).map((e) => e.changeId)).toEqual(sent.map((e) => e.changeId));
     expect((await b.samples.get(sampleId))?.data).toEqual((await a.samples.get(sampleId))?.data);
+    expect((await b.photos.get(photoId))?.data).toMatchObject({ caption: 'Split sack, bay 3' });
     const photo = await b.photos.get(photoId);
     expect(new Uint8Array(photo!.bytes!)).toEqual(new Uint8Array(photoBytes));
     expect(photo?.data.sha256).toBe((await a.photos.get(photoId))?.data.sha256);

@@ -99,7 +99,8 @@ export async function saveScanEdit(db: SitebandDb, edit: ScanEdit, now = Date.no
       instrumentCheckId,
       ...(reidentified ? { result: scanResultRecord(reidentified.outcome.result, reidentified.outcome.processed), inspectorAcknowledgedAt: reidentified.acknowledgedAt } : {}),
     };
-    await recordUpsert(db, { entity: 'scan', id: scan.id, caseId: scan.caseId, data }, now);
+    // The server's recomputation was of the old result: it no longer speaks for this one until the next pull.
+    await recordUpsert(db, { entity: 'scan', id: scan.id, caseId: scan.caseId, data, ...(reidentified ? { extra: { serverCheck: undefined } } : {}) }, now);
     let escalationId: string | null = null;
     if (escalation) {
       const raised = await db.escalations.filter((e) => e.data.scanId === scan.id).toArray();

@@ -167,6 +167,7 @@ describe('changing a saved scan', () => {
 
   it('re-runs the identification from the stored raw file with the new phase and stores the new result, acknowledged anew', async () => {
     const { d, saved, scan, raw, rawBefore } = await savedScan('synthetic-ir-ethanol-liquid.csv', ir);
+    await d.scans.update(scan.id, { serverCheck: { resultMismatch: false, serverRecomputedAt: '2026-04-01T08:00:00.000Z', serverRecomputeError: null, differences: [] } });
     const settings = { ...scanSettingsOf(scan.data), phase: 'gas' as const };
     expect(scanSettingsOf(scan.data)).toEqual(ir);
     expect(identificationChanged(scan.data, settings)).toBe(true);
@@ -186,6 +187,8 @@ describe('changing a saved scan', () => {
     expect(result.phase).toBe('gas');
     expect(result.processing).toMatchObject({ technique: 'ir', phase: 'gas' });
     expect(result.codeVersion).toBe(outcome.result.parameters.methodVersion);
+    // The server's check of the old result no longer stands for the new one.
+    expect(after.serverCheck).toBeUndefined();
     // The raw file is kept byte for byte and not queued again.
     const rawAfter = (await d.photos.get(raw.id))!;
     expect(new Uint8Array(rawAfter.bytes!)).toEqual(rawBefore);
