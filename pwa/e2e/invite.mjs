@@ -85,6 +85,18 @@ export function inviteTests({ baseUrl, password }) {
       await page.getByRole('alert').filter({ hasText: 'The password needs at least 12 characters.' }).waitFor();
       await page.getByLabel('New password').fill(newPassword);
       await page.getByLabel('The same password again').fill(`${newPassword}x`);
+      // Each field shows its own text on demand, so a typing slip can be seen before sending.
+      const repeatField = page.getByLabel('The same password again');
+      const showRepeat = page.getByRole('button', { name: 'Show password' }).nth(1);
+      await showRepeat.click();
+      assert.equal(await repeatField.getAttribute('type'), 'text');
+      assert.equal(await page.getByLabel('New password').getAttribute('type'), 'password', 'the other field stays hidden');
+      assert.equal(await showRepeat.getAttribute('aria-pressed'), 'true');
+      const box = await showRepeat.boundingBox();
+      assert.ok(box && box.height >= 48 && box.width >= 48, 'the show button is a 48 px touch target');
+      await assertAccessible(page, 'the set-password page with a password shown');
+      await showRepeat.click();
+      assert.equal(await repeatField.getAttribute('type'), 'password');
       await submit.click();
       await page.getByRole('alert').filter({ hasText: 'The two passwords differ.' }).waitFor();
 

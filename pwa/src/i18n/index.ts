@@ -3,6 +3,7 @@ import { initReactI18next } from 'react-i18next';
 import en from './en.json';
 import lock from './en/lock.json';
 import invite from './en/invite.json';
+import passwordInput from './en/password-input.json';
 
 /** Languages with a complete resource file; English is the source language. */
 export const SUPPORTED_LANGUAGES = ['en'] as const;
@@ -17,12 +18,12 @@ function storedLanguage(): Language {
 
 /**
  * Starts i18next with the bundled strings of the screens drawn before sign-in (sign-in, set
- * password, idle lock); the signed-in screens add theirs with addSignedInStrings. No network
+ * password, idle lock, and their password field); the signed-in screens add theirs with addSignedInStrings. No network
  * loading: the app must work offline.
  */
 export async function initI18n(): Promise<typeof i18next> {
   await i18next.use(initReactI18next).init({
-    resources: { en: { translation: { ...en, lock, invite } } },
+    resources: { en: { translation: { ...en, lock, invite, passwordInput } } },
     lng: storedLanguage(),
     fallbackLng: 'en',
     interpolation: { escapeValue: false },

@@ -2,7 +2,8 @@ import { useEffect, useState, type FormEvent } from 'react';
 import { MAX_PASSWORD_BYTES, MIN_PASSWORD_LENGTH, passwordPolicyBreach } from '@siteband/shared';
 import { useTranslation } from 'react-i18next';
 import { useNavigate, useSearchParams } from 'react-router-dom';
-import { FormError, SignInField, SignInLayout } from '../components/session/SignInLayout';
+import { PasswordInput } from '../components/session/PasswordInput';
+import { FormError, SignInLayout } from '../components/session/SignInLayout';
 import { useApiClient } from '../features/api/ApiClientContext';
 import { ApiError } from '../features/api/apiError';
 import { setPassword } from '../features/session/authApi';
@@ -54,22 +55,8 @@ export default function SetPasswordPage() {
       ) : (
         <form onSubmit={submit} noValidate>
           <p className="sb-muted">{t('invite.setIntro', { min: MIN_PASSWORD_LENGTH })}</p>
-          <SignInField
-            label={t('invite.newPassword')}
-            type="password"
-            autoComplete="new-password"
-            name="new-password"
-            value={password}
-            onValue={setPasswordText}
-          />
-          <SignInField
-            label={t('invite.repeatPassword')}
-            type="password"
-            autoComplete="new-password"
-            name="repeat-password"
-            value={repeat}
-            onValue={setRepeat}
-          />
+          <PasswordInput label={t('invite.newPassword')} autoComplete="new-password" name="new-password" value={password} onValue={setPasswordText} />
+          <PasswordInput label={t('invite.repeatPassword')} autoComplete="new-password" name="repeat-password" value={repeat} onValue={setRepeat} />
           <FormError message={error} />
           <button type="submit" className="sb-block-button" disabled={busy}>
             {busy ? t('invite.setting') : t('invite.setSubmit')}

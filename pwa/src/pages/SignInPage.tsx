@@ -1,6 +1,7 @@
 import { useEffect, useRef, useState, type FormEvent } from 'react';
 import { useNavigate, useSearchParams } from 'react-router-dom';
 import { useTranslation } from 'react-i18next';
+import { PasswordInput } from '../components/session/PasswordInput';
 import { FormError, SignInField, SignInLayout } from '../components/session/SignInLayout';
 import { loadSignedInArea } from '../features/navigation/appArea';
 import { homePathForRole } from '../features/navigation/roleTabs';
@@ -92,15 +93,7 @@ export default function SignInPage() {
           value={email}
           onValue={setEmail}
         />
-        <SignInField
-          label={t('signIn.password')}
-          type="password"
-          autoComplete="current-password"
-          name="password"
-          required
-          value={password}
-          onValue={setPassword}
-        />
+        <PasswordInput label={t('signIn.password')} autoComplete="current-password" name="password" required value={password} onValue={setPassword} />
         <FormError message={error} />
         <button type="submit" className="sb-block-button" disabled={busy}>
           {busy ? t('signIn.submitting') : t('signIn.submit')}

@@ -1,10 +1,11 @@
 import { useId, useState, type FormEvent } from 'react';
-import { IonButton, IonIcon, IonInput } from '@ionic/react';
+import { IonButton, IonIcon } from '@ionic/react';
 import { lockClosedOutline } from 'ionicons/icons';
 import { useTranslation } from 'react-i18next';
 import { IDLE_LOCK_CHOICES } from '../../config/idleLockMinutes';
 import { useIdleLock } from '../../features/lock/IdleLockProvider';
 import { PASSWORD_TRIES, PIN_PATTERN, PIN_TRIES } from '../../features/lock/idleLockRules';
+import { PasswordInput } from '../session/PasswordInput';
 
 /** The Account page's lock settings: idle time on this tablet, the PIN, and locking at once. */
 export function IdleLockSettings() {
@@ -61,28 +62,8 @@ export function IdleLockSettings() {
       </div>
       <p data-testid="pin-state">{lock.hasPin ? t('lock.settings.pinSet') : t('lock.settings.pinNone')}</p>
       <form onSubmit={savePin} noValidate>
-        <IonInput
-          className="sb-input"
-          label={t('lock.settings.newPin')}
-          labelPlacement="stacked"
-          fill="outline"
-          type="password"
-          inputmode="numeric"
-          autocomplete="off"
-          value={pin}
-          onIonInput={(e) => setPin(String(e.detail.value ?? ''))}
-        />
-        <IonInput
-          className="sb-input"
-          label={t('lock.settings.repeatPin')}
-          labelPlacement="stacked"
-          fill="outline"
-          type="password"
-          inputmode="numeric"
-          autocomplete="off"
-          value={repeat}
-          onIonInput={(e) => setRepeat(String(e.detail.value ?? ''))}
-        />
+        <PasswordInput label={t('lock.settings.newPin')} secret="pin" inputMode="numeric" autoComplete="off" value={pin} onValue={setPin} />
+        <PasswordInput label={t('lock.settings.repeatPin')} secret="pin" inputMode="numeric" autoComplete="off" value={repeat} onValue={setRepeat} />
         {error && (
           <p className="sb-error" role="alert">
             {error}

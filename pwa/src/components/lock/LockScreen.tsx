@@ -7,6 +7,7 @@ import { PIN_MAX_DIGITS } from '../../features/lock/idleLockRules';
 import { useOnlineStatus } from '../../features/network/onlineStatus';
 import { useSession } from '../../features/session/SessionProvider';
 import { signInErrorMessage } from '../../features/session/signInErrorMessage';
+import { PasswordInput } from '../session/PasswordInput';
 
 const KEYPAD_DIGITS = ['1', '2', '3', '4', '5', '6', '7', '8', '9'];
 
@@ -82,19 +83,16 @@ export function LockScreen() {
         )}
         {showPin ? (
           <form onSubmit={tryPin} className="sb-lock__form">
-            <label className="sb-lock__label" htmlFor="lock-pin">
-              {t('lock.pinLabel')}
-            </label>
-            <input
-              id="lock-pin"
-              className="sb-lock__input"
-              type="password"
+            <PasswordInput
+              look="lock"
+              secret="pin"
+              label={t('lock.pinLabel')}
               inputMode="numeric"
               autoComplete="off"
               maxLength={PIN_MAX_DIGITS}
               readOnly={busy}
               value={pin}
-              onChange={(e) => setPin(e.target.value.replace(/\D/g, '').slice(0, PIN_MAX_DIGITS))}
+              onValue={(typed) => setPin(typed.replace(/\D/g, '').slice(0, PIN_MAX_DIGITS))}
             />
             <div className="sb-keypad" role="group" aria-label={t('lock.keypad')}>
               {KEYPAD_DIGITS.map((digit) => (
@@ -121,18 +119,7 @@ export function LockScreen() {
         ) : (
           <form onSubmit={tryPassword} className="sb-lock__form">
             {serverOnly && <p className="sb-notice">{online ? t('lock.serverNeeded') : t('lock.serverOffline')}</p>}
-            <label className="sb-lock__label" htmlFor="lock-password">
-              {t('lock.passwordLabel')}
-            </label>
-            <input
-              id="lock-password"
-              className="sb-lock__input"
-              type="password"
-              autoComplete="current-password"
-              readOnly={busy}
-              value={password}
-              onChange={(e) => setPassword(e.target.value)}
-            />
+            <PasswordInput look="lock" label={t('lock.passwordLabel')} autoComplete="current-password" readOnly={busy} value={password} onValue={setPassword} />
             <button type="submit" className="sb-lock__submit" disabled={busy || !password || (serverOnly && !online)}>
               {busy ? t('lock.checking') : t('lock.unlock')}
             </button>
