@@ -71,7 +71,9 @@ export function IdleLockProvider({ defaultIdleMinutes, children }: { defaultIdle
       const now = Date.now();
       if (now - lastTouch < TOUCH_THROTTLE_MS) return;
       lastTouch = now;
-      store.touch(now);
+      // Once the event has gone through the app: a store update in the middle of it re-renders a
+      // controlled field before React has read the typed text, and the text is lost (a paste, a fill).
+      window.setTimeout(() => store.touch(now), 0);
     };
     const check = () => {
       const current = store.read();
