@@ -6,9 +6,9 @@ import type { PhotoRow } from '../../db/photosTable';
 import { createApiClient } from '../api/client';
 import { saveCase } from '../cases/saveCase';
 import { handleRequest } from '../identify/handleRequest';
-import type { IdentifyOutcome, ScanFile } from '../identify/protocol';
-import { DEFAULT_PROCESSING, DEFAULT_SCAN_SETTINGS, type ProcessingSettings, type ScanSettings } from '../identify/scanSettings';
-import { fixtureScan } from '../identify/testFixtures';
+import type { ScanFile } from '../identify/protocol';
+import { DEFAULT_PROCESSING, DEFAULT_SCAN_SETTINGS, type ScanSettings } from '../identify/scanSettings';
+import { fixtureScan, identify } from '../identify/testFixtures';
 import { saveSample } from '../samples/saveSample';
 import { mergePulled } from '../sync/mergePulled';
 import { createSyncEngine } from '../sync/syncEngine';
@@ -25,13 +25,6 @@ afterEach(async () => {
 
 const raman: ScanSettings = { ...DEFAULT_SCAN_SETTINGS, technique: 'raman', atr: false, excitationNm: 785 };
 const ir: ScanSettings = DEFAULT_SCAN_SETTINGS;
-
-/** The worker's own handler, as the capture screen and the scan edit run it. */
-function identify(file: ScanFile, scan: ScanSettings, processing: ProcessingSettings = DEFAULT_PROCESSING): IdentifyOutcome {
-  const response = handleRequest({ id: 1, kind: 'identify', file, scan, processing });
-  if (!response.ok || response.kind !== 'identify') throw new Error(`expected an identify answer, got ${JSON.stringify(response)}`);
-  return response.outcome;
-}
 
 /** A fresh database holding one open case with one sample (invented demo scenario). */
 async function withSample(): Promise<{ d: SitebandDb; caseId: string; sampleId: string }> {

@@ -9,7 +9,7 @@ export interface ConflictItem {
   row: CaptureRow<unknown>;
 }
 
-const ENTITIES: readonly CaptureEntity[] = ['case', 'sample', 'handover', 'note', 'attachment'];
+const ENTITIES: readonly CaptureEntity[] = ['case', 'sample', 'handover', 'note', 'attachment', 'scan'];
 
 /** Live: the conflicts of a case, across all its records. */
 export function useConflicts(caseId: string): ConflictItem[] | undefined {
