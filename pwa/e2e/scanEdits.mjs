@@ -1,7 +1,8 @@
 // Browser end-to-end test of correcting a saved scan and captioning photos offline: the scan's phase is
 // changed, its likely compounds are found again from the stored raw file and acknowledged anew; a photo
 // gets a caption when taken and another one later; everything survives a reload offline and reaches the
-// server with the next sync, which agrees with the tablet's new result. Registered in run.mjs.
+// server with the next sync, which agrees with the tablet's new result; a later change on another device
+// and here becomes a conflict shown in words and settled by keeping the tablet's copy. Registered in run.mjs.
 // The site, sample and captions are an invented demo scenario.
 import assert from 'node:assert/strict';
 import { readFileSync } from 'node:fs';
@@ -184,6 +185,70 @@ export function scanEditTests({ baseUrl, password }) {
       assert.equal(scan.resultMismatch, false);
       const photo = detail.attachments.find((a) => a.id === photoId);
       assert.deepEqual([photo.caption, photo.version, photo.receivedBytes === photo.size], [SECOND_CAPTION, 2, true]);
+    });
+
+    it('a scan changed on another device and here shows both copies in words, and "keep mine" sends the tablet copy with its own acknowledgement', async () => {
+      const { page, context } = browser;
+      const before = (await caseOnServer(token, caseId)).scans[0];
+      const fields = ['sampleId', 'technique', 'phase', 'excitationNm', 'recordedAt', 'instrumentCheckId', 'rawAttachmentId', 'rawSha256', 'parsedSummary', 'result', 'inspectorAcknowledgedAt'];
+      const data = Object.fromEntries(fields.filter((f) => f in before && before[f] !== null).map((f) => [f, before[f]]));
+      // Another tablet of the same inspector acknowledges the gas-phase result again.
+      const otherAcknowledgedAt = new Date().toISOString();
+      const other = await fetch(`${baseUrl}/api/sync/push`, {
+        method: 'POST',
+        headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${token}` },
+        body: JSON.stringify({
+          clientId: 'e2e-second-tablet',
+          batchId: crypto.randomUUID(),
+          changes: [{ changeId: crypto.randomUUID(), entity: 'scan', op: 'upsert', id: scanId, baseVersion: before.version, data: { ...data, inspectorAcknowledgedAt: otherAcknowledgedAt } }],
+        }),
+      });
+      assert.equal((await other.json()).results[0].status, 'applied');
+
+      // Offline, this tablet sets the phase back to solid or liquid, identifies again and acknowledges.
+      await goOffline(page, context);
+      await page.goto(scanUrl);
+      await waitForPage(page, 'Scan of TY-01');
+      const edit = page.getByTestId('scan-edit').filter({ visible: true });
+      await edit.getByTestId('edit-scan').click();
+      await edit.getByLabel('Solid or liquid', { exact: true }).check();
+      const acknowledge = edit.getByLabel(/I have read the caution cards/);
+      await acknowledge.waitFor({ timeout: 30_000 });
+      await acknowledge.check();
+      await edit.getByRole('button', { name: 'Acknowledge and mark reviewed by inspector' }).click();
+      await edit.getByTestId('save-scan-edit').click();
+      await edit.getByText(/^Saved\./).waitFor();
+      const mine = (await page.evaluate(readCapture)).scans.find((s) => s.id === scanId).data;
+      assert.equal(mine.phase, 'condensed');
+
+      await context.setOffline(false);
+      await page.getByTestId('connection-status').filter({ visible: true }).filter({ hasText: 'Online' }).waitFor();
+      await page.goto(`${baseUrl}/tabs/cases/${caseId}`);
+      await waitForPage(page, SITE);
+      await page.getByTestId('sync-now').filter({ visible: true }).click();
+      const item = page.getByTestId(`conflict-${scanId}`).filter({ visible: true });
+      await item.waitFor();
+      const phaseRow = item.locator('tr', { has: page.getByRole('rowheader', { name: /^Phase/ }) });
+      assert.deepEqual(await phaseRow.locator('th, td').allTextContents(), ['Phase (differs)', 'Solid or liquid', 'Gas cell']);
+      const acknowledgedRow = item.locator('tr', { has: page.getByRole('rowheader', { name: /^Acknowledged by the inspector/ }) });
+      // Both copies were acknowledged (times shown to the minute), so both count as reviewed by inspector.
+      const acknowledged = await acknowledgedRow.locator('td').allTextContents();
+      assert.equal(acknowledged.length, 2);
+      for (const cell of acknowledged) assert.match(cell, /\d/);
+      assert.match(await item.textContent(), /Top likely compounds.*band agreement/s);
+      assert.doesNotMatch(await item.textContent(), /[{}]|object Object/, 'no raw JSON');
+      assert.ok(!(await item.textContent()).includes(mine.rawSha256), 'no hash');
+      await assertAccessible(page, 'the case page with a scan conflict');
+      await item.scrollIntoViewIfNeeded();
+      await screenshot(page, 'scan-edit-conflict-800x1280');
+
+      await item.getByRole('button', { name: 'Keep mine' }).click();
+      await page.getByTestId('sync-now').filter({ visible: true }).click();
+      await waitForSynced(page);
+      const after = (await caseOnServer(token, caseId)).scans[0];
+      assert.deepEqual([after.phase, after.result.phase, after.version], ['condensed', 'condensed', before.version + 2]);
+      assert.equal(new Date(after.inspectorAcknowledgedAt).toISOString(), mine.inspectorAcknowledgedAt, "the tablet's result with the tablet's acknowledgement");
+      assert.deepEqual(browser.pageErrors, []);
     });
   });
 }
