@@ -9,6 +9,7 @@ import { deflateSync } from 'node:zlib';
 import { after, before, describe, it } from 'node:test';
 import { blockingViolations } from './axe.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
+import { push } from './fieldCase.mjs';
 import { apiToken, goOffline, openTab, signInTo, signOut, waitForPage } from './shell.mjs';
 
 const SPECTRA = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'fixtures', 'spectra');
@@ -357,16 +358,7 @@ export function captureTests({ baseUrl, password }) {
       const fields = ['siteName', 'address', 'latitude', 'longitude', 'locationAccuracyM', 'locationEnteredByHand', 'startedAt', 'weatherNotes', 'accessNotes', 'status'];
       const data = Object.fromEntries(fields.filter((f) => f in before).map((f) => [f, before[f]]));
       // Another tablet of the same inspector changes the weather first.
-      const other = await fetch(`${baseUrl}/api/sync/push`, {
-        method: 'POST',
-        headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${token}` },
-        body: JSON.stringify({
-          clientId: 'e2e-second-tablet',
-          batchId: crypto.randomUUID(),
-          changes: [{ changeId: crypto.randomUUID(), entity: 'case', op: 'upsert', id: caseId, baseVersion: before.version, data: { ...data, weatherNotes: 'Heavy rain from noon' } }],
-        }),
-      });
-      assert.equal((await other.json()).results[0].status, 'applied');
+      await push(baseUrl, token, [{ entity: 'case', id: caseId, baseVersion: before.version, data: { ...data, weatherNotes: 'Heavy rain from noon' } }], 'e2e-second-tablet');
 
       await page.locator('ion-button', { hasText: 'Edit visit details' }).filter({ visible: true }).click();
       await waitForPage(page, 'Edit case');

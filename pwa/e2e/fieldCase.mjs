@@ -21,12 +21,15 @@ export async function apiToken(baseUrl, email, password) {
   return (await response.json()).accessToken;
 }
 
-/** Pushes changes as one batch and asserts every one was applied; gives the new versions by id. */
-async function push(baseUrl, token, changes) {
+/**
+ * Pushes changes as one batch from the tablet `clientId` and asserts every one was applied; gives the
+ * new versions by id. The browser tests use it as another tablet writing to the server meanwhile.
+ */
+export async function push(baseUrl, token, changes, clientId = 'e2e-review') {
   const response = await fetch(`${baseUrl}/api/sync/push`, {
     method: 'POST',
     headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${token}` },
-    body: JSON.stringify({ clientId: 'e2e-review', batchId: randomUUID(), changes: changes.map((c) => ({ changeId: randomUUID(), op: 'upsert', ...c })) }),
+    body: JSON.stringify({ clientId, batchId: randomUUID(), changes: changes.map((c) => ({ changeId: randomUUID(), op: 'upsert', ...c })) }),
   });
   assert.equal(response.status, 200, `push answered ${response.status}`);
   const { results } = await response.json();

@@ -12,6 +12,7 @@ import { after, before, describe, it } from 'node:test';
 import { blockingViolations } from './axe.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
 import { gradientPng, readCapture, waitForSynced } from './capture.mjs';
+import { push } from './fieldCase.mjs';
 import { apiToken, goOffline, signInTo, waitForPage } from './shell.mjs';
 
 const SPECTRA = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'fixtures', 'spectra');
@@ -193,17 +194,7 @@ export function scanEditTests({ baseUrl, password }) {
       const fields = ['sampleId', 'technique', 'phase', 'excitationNm', 'recordedAt', 'instrumentCheckId', 'rawAttachmentId', 'rawSha256', 'parsedSummary', 'result', 'inspectorAcknowledgedAt'];
       const data = Object.fromEntries(fields.filter((f) => f in before && before[f] !== null).map((f) => [f, before[f]]));
       // Another tablet of the same inspector acknowledges the gas-phase result again.
-      const otherAcknowledgedAt = new Date().toISOString();
-      const other = await fetch(`${baseUrl}/api/sync/push`, {
-        method: 'POST',
-        headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${token}` },
-        body: JSON.stringify({
-          clientId: 'e2e-second-tablet',
-          batchId: crypto.randomUUID(),
-          changes: [{ changeId: crypto.randomUUID(), entity: 'scan', op: 'upsert', id: scanId, baseVersion: before.version, data: { ...data, inspectorAcknowledgedAt: otherAcknowledgedAt } }],
-        }),
-      });
-      assert.equal((await other.json()).results[0].status, 'applied');
+      await push(baseUrl, token, [{ entity: 'scan', id: scanId, baseVersion: before.version, data: { ...data, inspectorAcknowledgedAt: new Date().toISOString() } }], 'e2e-second-tablet');
 
       // Offline, this tablet sets the phase back to solid or liquid, identifies again and acknowledges.
       await goOffline(page, context);
