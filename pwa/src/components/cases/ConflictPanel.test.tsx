@@ -42,12 +42,8 @@ async function noteChangedElsewhere(server: TestServer): Promise<{ caseId: strin
   return { caseId, noteId };
 }
 
-/**
- * A synced IR scan of a liquid (invented demo data) that another device then identified again as a gas,
- * without acknowledging the new result; meanwhile this tablet identified it again with a higher peak
- * threshold and acknowledged that, and its push came back as a conflict.
- */
-async function scanChangedOnBothSides(server: TestServer) {
+/** A synced IR scan of a liquid (invented demo data) that another device then identified again as a gas, without acknowledging the new result. */
+async function scanChangedElsewhere(server: TestServer) {
   const db = captureDb();
   const caseId = crypto.randomUUID();
   const sampleId = crypto.randomUUID();
@@ -67,7 +63,12 @@ async function scanChangedOnBothSides(server: TestServer) {
   const gas = identify(file, { ...DEFAULT_SCAN_SETTINGS, phase: 'gas' });
   const serverData = { ...synced.data, phase: 'gas', result: scanResultRecord(gas.result, gas.processed), inspectorAcknowledgedAt: null };
   server.writeAsOtherDevice('scan', scanId, { ...serverData, caseId, resultMismatch: false, serverRecomputedAt: '2026-04-01T09:40:00.000Z', serverRecomputeError: null, mismatch: { differences: [] } });
+  return { db, caseId, scanId, synced, serverData };
+}
 
+/** The scan changed elsewhere, while this tablet identified it again with a higher peak threshold and acknowledged that: its push came back as a conflict. */
+async function scanChangedOnBothSides(server: TestServer) {
+  const { db, caseId, scanId, synced, serverData } = await scanChangedElsewhere(server);
   const processing = { ...processingSettingsOf(synced.data, 'ir'), peakThresholdSigma: 6 };
   const outcome = identify(storedRawFile((await db.photos.get(synced.data.rawAttachmentId))!)!, DEFAULT_SCAN_SETTINGS, processing);
   await saveScanEdit(db, { scan: synced, settings: DEFAULT_SCAN_SETTINGS, reidentified: { outcome, acknowledgedAt: '2026-04-01T09:30:00.000Z' }, check: 'keep' });
@@ -176,6 +177,29 @@ describe('ConflictPanel', () => {
     expect(row.serverCheck).toMatchObject({ resultMismatch: false, serverRecomputedAt: '2026-04-01T09:40:00.000Z' });
     expect(row.version).toBe(2);
     expect(await db.outbox.filter((e) => e.id === scanId).count()).toBe(0);
+    await waitFor(() => expect(screen.queryByTestId('conflicts')).toBeNull());
+  }, 60_000);
+
+  it('says when this tablet deleted a scan the server changed, shows the server’s scan alone in words, and "delete it anyway" queues the delete', async () => {
+    const server = createTestServer();
+    const { db, caseId, scanId } = await scanChangedElsewhere(server);
+    await recordDelete(db, 'scan', scanId);
+    await pushOutbox(db, clientFor(server), 'tablet-test');
+    expect((await db.scans.get(scanId))?.sync).toBe('conflict');
+    render(<ConflictPanel caseId={caseId} />);
+    const item = await screen.findByTestId(`conflict-${scanId}`);
+    expect(item.dataset.op).toBe('delete');
+    expect(within(item).getByTestId('conflict-deleted-here').textContent).toMatch(/^Deleted on this tablet, and changed on the server meanwhile/);
+    expect(within(item).queryByRole('columnheader', { name: "This tablet's copy" })).toBeNull();
+    expect(fieldRow(item, 'Phase')).toEqual(['Phase', 'Gas cell']);
+    expect(fieldRow(item, 'Acknowledged by the inspector')).toEqual(['Acknowledged by the inspector', 'Not acknowledged']);
+    expect(within(item).queryByTestId('conflict-result-differs')).toBeNull();
+    expect(item.textContent).not.toContain('{');
+    fireEvent.click(within(item).getByText('Delete it anyway'));
+    await waitFor(async () => expect((await db.scans.get(scanId))?.sync).toBe('local'));
+    const outbox = await db.outbox.filter((e) => e.id === scanId).toArray();
+    expect(outbox.map((e) => [e.entity, e.op, e.status])).toEqual([['scan', 'delete', 'pending']]);
+    expect(await db.scans.get(scanId)).toMatchObject({ deletePending: true, version: 2 });
     await waitFor(() => expect(screen.queryByTestId('conflicts')).toBeNull());
   }, 60_000);
 });
