@@ -151,7 +151,9 @@ export function editingTests({ baseUrl, password }) {
       await waitForPage(page, SITE);
       await noteWith(page, 'one leaking').waitFor();
       assert.equal(await noteWith(page, 'Strong draught').count(), 0);
-      assert.equal(await page.getByTestId('case-photos').filter({ visible: true }).getByTestId('photo').count(), 1);
+      const kept = page.getByTestId('case-photos').filter({ visible: true }).getByTestId('photo');
+      await kept.first().waitFor();
+      assert.equal(await kept.count(), 1);
       await page.getByText('Mill Lane 3a, Ashbury').filter({ visible: true }).first().waitFor();
     });
 

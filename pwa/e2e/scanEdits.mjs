@@ -123,7 +123,8 @@ export function scanEditTests({ baseUrl, password }) {
       await edit.getByRole('button', { name: 'Acknowledge and mark reviewed by inspector' }).click();
       await edit.getByTestId('save-scan-edit').click();
       await edit.getByText(/^Saved\./).waitFor();
-      assert.equal(await page.getByTestId('scan-sync').filter({ visible: true }).textContent(), 'Local only');
+      // The status reads the outbox through a live query: it turns after the save, not with it.
+      await page.getByTestId('scan-sync').filter({ visible: true, hasText: 'Local only' }).waitFor();
 
       const local = await page.evaluate(readCapture);
       const scan = local.scans.find((s) => s.id === scanId);
