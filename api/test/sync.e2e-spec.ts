@@ -232,6 +232,29 @@ describe('Sync push and pull (e2e, MariaDB + S3 fake)', () => {
     expect(inReview.reason).toBe(`Case ${caseId} is in_review: it is with the supervisors and cannot be changed from the tablet`);
   });
 
+  it('checks each change of a batch against its parents as the earlier changes of the batch left them', async () => {
+    const caseId = await openCase();
+    const [sampleId, scanId, rawId, photoId, lateSampleId] = [randomUUID(), randomUUID(), randomUUID(), randomUUID(), randomUUID()];
+    const raw = Buffer.from('Wavenumber (cm-1),Absorbance\n1000,0.1\n1001,0.2\n');
+    const rawFile = { ownerType: 'scan', ownerId: scanId, kind: 'raw-scan', fileName: 'S-01.csv', contentType: 'text/csv', size: raw.length, sha256: sha256(raw) };
+    const results = await push(t, inspector, [
+      upsert('sample', sampleId, demo.sample(caseId)),
+      upsert('scan', scanId, demo.scan(sampleId)),
+      // The scan as read for its photo, then changed to name a raw file: the raw file is checked against the change.
+      upsert('attachment', photoId, demo.photo('scan', scanId, randomBytes(1_000))),
+      upsert('scan', scanId, demo.scan(sampleId, { rawAttachmentId: rawId, rawSha256: sha256(Buffer.from('another file')) }), 1),
+      upsert('attachment', rawId, rawFile),
+      // The case as read for the sample, then submitted: a later sample sees it submitted.
+      upsert('case', caseId, demo.case({ status: 'submitted' }), 1),
+      upsert('sample', lateSampleId, demo.sample(caseId, { label: 'S-09' })),
+    ]);
+    expect(results.map((result) => result.status)).toEqual(['applied', 'applied', 'applied', 'applied', 'rejected', 'applied', 'rejected']);
+    expect(results[4].reason).toBe(`sha256 differs from the rawSha256 of scan ${scanId}`);
+    expect(results[6].reason).toBe(`Case ${caseId} is submitted: reopen it before changing what belongs to it`);
+    expect(await count('attachments', 'id = ?', [rawId])).toBe(0);
+    expect(await count('samples', 'id = ?', [lateSampleId])).toBe(0);
+  });
+
   it('passes deletions on as tombstones and keeps hand-overs and instrument checks permanent', async () => {
     const caseId = await openCase();
     const sampleId = randomUUID();

@@ -1,7 +1,7 @@
 import { photoCaptionOf, photoCaptionProblem } from '@siteband/shared';
 import { writableCase } from '../cases/case-access';
 import { writableSample } from '../samples/sample-parent';
-import { Scan } from '../scans/scan.entity';
+import { scanLinks } from '../scans/scan-links';
 import { ChangeRejected, type ChangeContext, type SyncHandler } from '../sync/sync-handler';
 import { contentTypeProblem, mediaType, sizeProblem } from './attachment-limits';
 import { Attachment } from './attachment.entity';
@@ -22,7 +22,7 @@ export const attachmentSyncHandler: SyncHandler<Attachment, AttachmentDataDto> =
     if (data) checkFile(data, existing);
     const caseId = await ownerCaseId(ctx, existing ?? (data as AttachmentDataDto));
     if (data?.kind === 'raw-scan') {
-      const scan = await ctx.manager.findOneBy(Scan, { id: data.ownerId });
+      const scan = await scanLinks(ctx, data.ownerId);
       if (scan?.rawAttachmentId === id && scan.rawSha256 !== data.sha256) {
         throw new ChangeRejected(`sha256 differs from the rawSha256 of scan ${scan.id}`);
       }
@@ -84,10 +84,10 @@ function checkFile(data: AttachmentDataDto, existing: Attachment | null): void {
 
 /** The case of the attachment's owner, when the user may write there. */
 async function ownerCaseId(ctx: ChangeContext, owner: { ownerType: string; ownerId: string }): Promise<string> {
-  if (owner.ownerType === 'case') return (await writableCase(ctx.manager, owner.ownerId, ctx.user)).id;
-  if (owner.ownerType === 'sample') return (await writableSample(ctx.manager, owner.ownerId, ctx.user)).caseId;
-  const scan = await ctx.manager.findOneBy(Scan, { id: owner.ownerId });
+  if (owner.ownerType === 'case') return (await writableCase(ctx, owner.ownerId)).id;
+  if (owner.ownerType === 'sample') return (await writableSample(ctx, owner.ownerId)).caseId;
+  const scan = await scanLinks(ctx, owner.ownerId);
   if (!scan) throw new ChangeRejected(`Scan ${owner.ownerId} is not on the server: push the scan first`);
   if (scan.deletedAt) throw new ChangeRejected(`Scan ${owner.ownerId} was deleted`);
-  return (await writableCase(ctx.manager, scan.caseId, ctx.user)).id;
+  return (await writableCase(ctx, scan.caseId)).id;
 }

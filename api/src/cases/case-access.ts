@@ -1,7 +1,7 @@
 import type { Role } from '@siteband/shared';
-import type { EntityManager, ObjectLiteral, SelectQueryBuilder } from 'typeorm';
+import type { ObjectLiteral, SelectQueryBuilder } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user';
-import { ChangeRejected } from '../sync/sync-handler';
+import { ChangeRejected, type ChangeContext } from '../sync/sync-handler';
 import { Case } from './case.entity';
 
 /**
@@ -44,10 +44,10 @@ export function canSeeCase(user: AuthenticatedUser, row: Case): boolean {
  * The case a change below it belongs to, when the user may write there: their own, not deleted, and open
  * (a submitted case is frozen until the inspector reopens it).
  */
-export async function writableCase(manager: EntityManager, caseId: string, user: AuthenticatedUser): Promise<Case> {
-  const row = await manager.findOneBy(Case, { id: caseId });
+export async function writableCase(ctx: ChangeContext, caseId: string): Promise<Case> {
+  const row = await ctx.reads.findOne(Case, caseId);
   if (!row) throw new ChangeRejected(`Case ${caseId} is not on the server: push the case before what belongs to it`);
-  assertOwnCase(row, user);
+  assertOwnCase(row, ctx.user);
   if (row.deletedAt) throw new ChangeRejected(`Case ${caseId} was deleted`);
   if (row.status !== 'open') throw new ChangeRejected(`Case ${caseId} is ${row.status}: reopen it before changing what belongs to it`);
   return row;

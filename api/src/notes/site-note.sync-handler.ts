@@ -17,9 +17,9 @@ export const siteNoteSyncHandler: SyncHandler<SiteNote, SiteNoteDataDto> = {
       throw new ChangeRejected(`Note ${id} belongs to case ${existing.caseId}; it cannot move to another case`);
     }
     const caseId = existing?.caseId ?? (data as SiteNoteDataDto).caseId;
-    await writableCase(ctx.manager, caseId, ctx.user);
+    await writableCase(ctx, caseId);
     if (data?.sampleId) {
-      const sample = await writableSample(ctx.manager, data.sampleId, ctx.user);
+      const sample = await writableSample(ctx, data.sampleId);
       if (sample.caseId !== caseId) throw new ChangeRejected(`Sample ${sample.id} is not in case ${caseId}`);
     }
     return caseId;

@@ -12,7 +12,7 @@ export const handoverSyncHandler: SyncHandler<Handover, HandoverDataDto> = {
   appendOnly: true,
 
   async authorize(ctx, _id, data, existing) {
-    const sample = await writableSample(ctx.manager, existing?.sampleId ?? (data as HandoverDataDto).sampleId, ctx.user);
+    const sample = await writableSample(ctx, existing?.sampleId ?? (data as HandoverDataDto).sampleId);
     return sample.caseId;
   },
 

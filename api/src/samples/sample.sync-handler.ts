@@ -21,7 +21,7 @@ export const sampleSyncHandler: SyncHandler<Sample, SampleDataDto> = {
     if (existing && data && data.caseId !== existing.caseId) {
       throw new ChangeRejected(`Sample ${id} belongs to case ${existing.caseId}; a sample cannot move to another case`);
     }
-    await writableCase(ctx.manager, caseId, ctx.user);
+    await writableCase(ctx, caseId);
     return caseId;
   },
 

@@ -2,7 +2,7 @@ import { writableCase } from '../cases/case-access';
 import { ChangeRejected, type SyncHandler } from '../sync/sync-handler';
 import { EscalationDataDto } from './dto/escalation-data.dto';
 import { Escalation } from './escalation.entity';
-import { Scan } from './scan.entity';
+import { scanLinks } from './scan-links';
 
 /**
  * Escalations through sync: raised once from the tablet (then permanent for it); the safety officer's
@@ -17,9 +17,9 @@ export const escalationSyncHandler: SyncHandler<Escalation, EscalationDataDto> =
 
   async authorize(ctx, _id, data, existing) {
     const caseId = existing?.caseId ?? (data as EscalationDataDto).caseId;
-    await writableCase(ctx.manager, caseId, ctx.user);
+    await writableCase(ctx, caseId);
     if (data?.scanId) {
-      const scan = await ctx.manager.findOneBy(Scan, { id: data.scanId });
+      const scan = await scanLinks(ctx, data.scanId);
       if (!scan || scan.caseId !== caseId) throw new ChangeRejected(`Scan ${data.scanId} is not in case ${caseId}: push it first`);
     }
     return caseId;

@@ -13,7 +13,7 @@ export const instrumentCheckSyncHandler: SyncHandler<InstrumentCheck, Instrument
 
   async authorize(ctx, _id, data, existing) {
     const caseId = existing?.caseId ?? (data as InstrumentCheckDataDto).caseId;
-    await writableCase(ctx.manager, caseId, ctx.user);
+    await writableCase(ctx, caseId);
     return caseId;
   },
 

@@ -22,7 +22,7 @@ export const scanSyncHandler: SyncHandler<Scan, ScanDataDto> = {
     if (existing && data && data.sampleId !== existing.sampleId) {
       throw new ChangeRejected(`Scan ${id} belongs to sample ${existing.sampleId}; a scan cannot move to another sample`);
     }
-    const sample = await writableSample(ctx.manager, existing?.sampleId ?? (data as ScanDataDto).sampleId, ctx.user);
+    const sample = await writableSample(ctx, existing?.sampleId ?? (data as ScanDataDto).sampleId);
     if (data) await checkLinks(ctx, id, data, sample.caseId);
     return sample.caseId;
   },
@@ -92,13 +92,13 @@ export const scanSyncHandler: SyncHandler<Scan, ScanDataDto> = {
  */
 async function checkLinks(ctx: ChangeContext, id: string, data: ScanDataDto, caseId: string): Promise<void> {
   if (data.instrumentCheckId) {
-    const check = await ctx.manager.findOneBy(InstrumentCheck, { id: data.instrumentCheckId });
+    const check = await ctx.reads.findOne(InstrumentCheck, data.instrumentCheckId);
     if (!check || check.caseId !== caseId) {
       throw new ChangeRejected(`Instrument check ${data.instrumentCheckId} is not in case ${caseId}: push it first`);
     }
   }
   if (data.rawAttachmentId) {
-    const raw = await ctx.manager.findOneBy(Attachment, { id: data.rawAttachmentId });
+    const raw = await ctx.reads.findOne(Attachment, data.rawAttachmentId);
     if (raw && (raw.ownerType !== 'scan' || raw.ownerId !== id || raw.kind !== 'raw-scan')) {
       throw new ChangeRejected(`Attachment ${raw.id} is not a raw-scan attachment of scan ${id}`);
     }

@@ -2,6 +2,7 @@ import { Inject, Injectable, Optional } from '@nestjs/common';
 import { DataSource, In, type EntityManager } from 'typeorm';
 import { AuditService, type AuditRecordInput } from '../audit/audit.service';
 import type { AuthenticatedUser } from '../auth/authenticated-user';
+import { BatchReads } from './batch-reads';
 import { ChangeEnvelopeDto } from './dto/change-envelope.dto';
 import type { ChangeResultDto } from './dto/change-result.dto';
 import { SyncRecordDto } from './dto/sync-record.dto';
@@ -69,6 +70,7 @@ export class ChangeApplier {
       const writes: BatchWrites = { counter, audit: [], outcomes: new Map(), prefetched: await this.prefetch(manager, valid) };
       const stored = valid.length ? await manager.findBy(SyncChange, { changeId: In([...new Set(valid.map((change) => change.changeId))]) }) : [];
       const previous = new Map(stored.map((row) => [row.changeId, row]));
+      const ctx: ChangeContext = { manager, user, reads: new BatchReads(manager) };
 
       const results: ChangeResultDto[] = [];
       for (const [i, envelope] of envelopes.entries()) {
@@ -86,7 +88,7 @@ export class ChangeApplier {
         }
         let result: ChangeResultDto;
         try {
-          result = await this.decide({ manager, user }, change, writes);
+          result = await this.decide(ctx, change, writes);
         } catch (error) {
           if (!(error instanceof ChangeRejected)) throw error;
           result = { changeId: change.changeId, status: 'rejected', reason: error.message };
@@ -210,8 +212,9 @@ export class ChangeApplier {
     } else {
       await ctx.manager.save(handler.target, row);
     }
-    // Read again if a later change of this batch names the record.
+    // Read again if a later change of this batch names the record, or looks it up as a parent.
     writes.prefetched.delete(`${handler.entity}:${row.id}`);
+    ctx.reads.forget(handler.target, row.id);
     writes.audit.push({
       actorId: ctx.user.id,
       actorRole: ctx.user.role,

@@ -1,5 +1,6 @@
 import type { EntityManager } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user';
+import type { BatchReads } from './batch-reads';
 import type { SyncedRecord } from './synced-record';
 
 /** The kinds of record a client can pull; all but `decision` and `escalationNote` (written by the review and escalation routes) can be pushed too. */
@@ -31,10 +32,12 @@ export class ChangeRejected extends Error {
   }
 }
 
-/** What a handler may use while a change is applied: the change's own transaction and who sent it. */
+/** What a handler may use while a change is applied: the change's own transaction, who sent it, and the batch's parent lookups. */
 export interface ChangeContext {
   manager: EntityManager;
   user: AuthenticatedUser;
+  /** Parents (case, sample, scan...) as read in this batch: look them up here rather than through `manager`. */
+  reads: BatchReads;
 }
 
 /** What a pull needs of one kind of record: its table, its case link and its client view. */

@@ -1,0 +1,13 @@
+import type { FindOptionsSelect } from 'typeorm';
+import type { ChangeContext } from '../sync/sync-handler';
+import { Scan } from './scan.entity';
+
+/** What a record below a scan is checked against: its case, its tombstone and its raw file; not the scan's large JSON. */
+const SCAN_LINK_COLUMNS = { id: true, caseId: true, deletedAt: true, rawAttachmentId: true, rawSha256: true } as const satisfies FindOptionsSelect<Scan>;
+
+export type ScanLinks = Pick<Scan, keyof typeof SCAN_LINK_COLUMNS>;
+
+/** A scan as the parent of a change (an attachment, an escalation), as read in the change's batch; null when not on the server. */
+export function scanLinks(ctx: ChangeContext, id: string): Promise<ScanLinks | null> {
+  return ctx.reads.findOne(Scan, id, SCAN_LINK_COLUMNS);
+}
