@@ -12,8 +12,7 @@ import {
 } from '@nestjs/common';
 import { DataSource } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user';
-import { canSeeCase } from '../cases/case-access';
-import { Case } from '../cases/case.entity';
+import { whereCaseVisible } from '../cases/case-access';
 import { ScanRecomputeQueue } from '../scans/scan-recompute.queue';
 import { ObjectStorageService } from '../storage/object-storage.service';
 import { lockSyncCounter, takeSyncSeq } from '../sync/sync-sequence';
@@ -150,11 +149,11 @@ export class AttachmentUploadsService {
     return AttachmentStatusDto.fromEntity(row);
   }
 
-  /** The live attachment, when the user may see its case (inspectors: only their own); 404 otherwise. */
+  /** The live attachment, when the user may see its case (inspectors: only their own); 404 otherwise. One query. */
   private async visible(id: string, user: AuthenticatedUser): Promise<Attachment> {
-    const row = await this.dataSource.getRepository(Attachment).findOneBy({ id });
-    const owner = row && (await this.dataSource.getRepository(Case).findOneBy({ id: row.caseId }));
-    if (!row || row.deletedAt || !owner || !canSeeCase(user, owner)) {
+    const query = this.dataSource.getRepository(Attachment).createQueryBuilder('a').where('a.id = :id', { id });
+    const row = await whereCaseVisible(query, 'a.caseId', user).getOne();
+    if (!row || row.deletedAt) {
       throw new NotFoundException(`No attachment with the id ${id} is visible to you`);
     }
     return row;

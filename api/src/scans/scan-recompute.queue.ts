@@ -57,7 +57,7 @@ export class ScanRecomputeQueue implements OnApplicationBootstrap, BeforeApplica
     this.syncActivity();
     if (attachment.kind !== 'raw-scan' || attachment.ownerType !== 'scan') return;
     try {
-      const scan = await this.dataSource.getRepository(Scan).findOneBy({ id: attachment.ownerId, rawAttachmentId: attachment.id });
+      const scan = await this.dataSource.getRepository(Scan).findOne({ select: { id: true }, where: { id: attachment.ownerId, rawAttachmentId: attachment.id } });
       if (scan) this.enqueue(scan.id);
     } catch (error) {
       this.logger.error(`Attachment ${attachment.id}: its scan was not queued: ${error instanceof Error ? error.message : String(error)}`);
