@@ -1,8 +1,13 @@
 import { registerDecorator, type ValidationOptions } from 'class-validator';
+import { TakenAsIs } from './validate-data';
 
-/** Refuses a JSON field whose serialised form is longer than `maxChars` (free-form JSON is bounded here). */
+/**
+ * Refuses a JSON field whose serialised form is longer than `maxChars` (free-form JSON is bounded here).
+ * The field is free-form, so `validateData` takes it as sent (`TakenAsIs`).
+ */
 export function MaxJsonLength(maxChars: number, options?: ValidationOptions): PropertyDecorator {
   return (target: object, propertyName: string | symbol) => {
+    TakenAsIs()(target, propertyName);
     registerDecorator({
       name: 'maxJsonLength',
       target: target.constructor,

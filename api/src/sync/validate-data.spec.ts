@@ -1,6 +1,7 @@
 import 'reflect-metadata';
 import { SampleDataDto } from '../samples/dto/sample-data.dto';
-import { ScanDataDto } from '../scans/dto/scan-data.dto';
+import { MAX_SCAN_JSON_CHARS, ScanDataDto } from '../scans/dto/scan-data.dto';
+import { ChangeEnvelopeDto } from './dto/change-envelope.dto';
 import { validateData } from './validate-data';
 
 const sample = {
@@ -49,5 +50,26 @@ describe('validateData', () => {
       ok: false,
       problems: 'result needs parameters (the processing parameters, as an object)',
     });
+  });
+
+  it('takes free-form JSON as sent, and still checks it', () => {
+    const scan = { sampleId: sample.caseId, technique: 'ir', phase: 'condensed', recordedAt: '2026-11-30T08:55:00.000Z' };
+    const result = { codeVersion: '1', libraryVersion: 'a', parameters: { windowCm1: 8 }, candidates: [{ id: 'c1', bands: [[1, 2]] }] };
+    const validated = validateData(ScanDataDto, { ...scan, result });
+    expect(validated.ok && validated.value.result).toBe(result);
+    expect(validateData(ScanDataDto, { ...scan, parsedSummary: { note: 'x'.repeat(MAX_SCAN_JSON_CHARS) } })).toEqual({
+      ok: false,
+      problems: `parsedSummary must serialise to at most ${MAX_SCAN_JSON_CHARS} characters of JSON`,
+    });
+  });
+
+  it('hands a change its data as sent, checked as an object, and none when none was sent', () => {
+    const change = { changeId: '0b5a7c1e-4d3f-4e2a-9b8c-1d2e3f4a5b6c', entity: 'note', op: 'upsert', id: sample.caseId, baseVersion: null };
+    const data = { caseId: sample.caseId, text: 'Drum 4 leaking', observations: [{ at: 'gate' }] };
+    const upsert = validateData(ChangeEnvelopeDto, { ...change, data });
+    expect(upsert.ok && upsert.value.data).toBe(data);
+    expect(validateData(ChangeEnvelopeDto, { ...change, data: 'text' })).toEqual({ ok: false, problems: 'data must be an object' });
+    const remove = validateData(ChangeEnvelopeDto, { ...change, op: 'delete', baseVersion: 2 });
+    expect(remove.ok && remove.value.data).toBeUndefined();
   });
 });

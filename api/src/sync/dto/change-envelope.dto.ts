@@ -1,6 +1,7 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsIn, IsInt, IsObject, IsUUID, Min, ValidateIf } from 'class-validator';
 import { SYNC_ENTITIES, type SyncEntityName } from '../sync-handler';
+import { TakenAsIs } from '../validate-data';
 
 export const SYNC_OPS = ['upsert', 'delete'] as const;
 export type SyncOp = (typeof SYNC_OPS)[number];
@@ -34,5 +35,6 @@ export class ChangeEnvelopeDto {
   @ApiPropertyOptional({ type: Object, description: 'The whole record for an upsert (see src/sync/PROTOCOL.md); ignored for a delete' })
   @ValidateIf((change: ChangeEnvelopeDto) => change.op === 'upsert' || change.data !== undefined)
   @IsObject()
+  @TakenAsIs()
   data?: Record<string, unknown>;
 }
