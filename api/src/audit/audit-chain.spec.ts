@@ -40,6 +40,29 @@ describe('canonicalJson', () => {
   it('gives one text for the same content in any key order', () => {
     expect(canonicalJson({ x: 'é', y: [1.5, true] })).toBe(canonicalJson(JSON.parse('{"y":[1.5,true],"x":"é"}')));
   });
+
+  it('takes every value as JSON does: members without a JSON value left out, null in arrays, toJSON and class instances through JSON', () => {
+    class Reading {
+      constructor(readonly cm1: number, readonly hidden?: string) {}
+    }
+    const bare = Object.assign(Object.create(null) as object, { b: 2, a: 1 });
+    const value = {
+      z: [undefined, () => 1, Symbol('s'), new Date('2026-11-30T08:00:00Z'), NaN, -0, [, 2]],
+      f: () => 1,
+      'ü key': { toJSON: () => ({ y: 1, x: [new Date(0)] }) },
+      reading: new Reading(1601.2),
+      map: new Map([['k', 1]]),
+      bare,
+      text: 'line\n"quoted" \u2028',
+      nested: { deeper: { deepest: [{ b: null, a: undefined }] } },
+    };
+    expect(canonicalJson(value)).toBe(
+      '{"bare":{"a":1,"b":2},"map":{},"nested":{"deeper":{"deepest":[{"b":null}]}},"reading":{"cm1":1601.2},' +
+        '"text":"line\\n\\"quoted\\" \u2028","z":[null,null,null,"2026-11-30T08:00:00.000Z",null,0,[null,2]],' +
+        '"ü key":{"x":["1970-01-01T00:00:00.000Z"],"y":1}}',
+    );
+    expect(canonicalJson(undefined)).toBe('null');
+  });
 });
 
 describe('entryHash', () => {

@@ -21,23 +21,40 @@ export interface HashedFields {
 
 /**
  * JSON with object keys sorted at every depth and no whitespace, so the same value always gives the same
- * text. Values are first taken through JSON (dates become ISO strings, undefined members disappear).
+ * text. Values are taken as JSON takes them (dates become ISO strings, undefined members disappear, in
+ * arrays they become null), in one walk: plain data is written directly, anything else (a value with
+ * `toJSON` other than a date, a class instance) first goes through JSON.
  */
 export function canonicalJson(value: unknown): string {
-  const plain: unknown = JSON.parse(JSON.stringify(value ?? null));
-  return write(plain);
+  return write(value ?? null);
 }
 
+/** Nothing in JSON: left out of an object, null in an array. */
+const isOmitted = (value: unknown) => value === undefined || typeof value === 'function' || typeof value === 'symbol';
+
 function write(value: unknown): string {
-  if (Array.isArray(value)) return `[${value.map(write).join(',')}]`;
-  if (value !== null && typeof value === 'object') {
-    const record = value as Record<string, unknown>;
-    const members = Object.keys(record)
-      .sort()
-      .map((key) => `${JSON.stringify(key)}:${write(record[key])}`);
-    return `{${members.join(',')}}`;
+  if (value === null || typeof value !== 'object') return JSON.stringify(value);
+  if (value instanceof Date) return JSON.stringify(value);
+  if (Array.isArray(value)) {
+    let text = '[';
+    for (let i = 0; i < value.length; i += 1) {
+      const item: unknown = value[i];
+      text += `${i ? ',' : ''}${isOmitted(item) ? 'null' : write(item)}`;
+    }
+    return `${text}]`;
   }
-  return JSON.stringify(value);
+  const prototype: unknown = Object.getPrototypeOf(value);
+  if ((prototype !== Object.prototype && prototype !== null) || typeof (value as { toJSON?: unknown }).toJSON === 'function') {
+    return write(JSON.parse(JSON.stringify(value)) as unknown);
+  }
+  const record = value as Record<string, unknown>;
+  let text = '{';
+  for (const key of Object.keys(record).sort()) {
+    const member = record[key];
+    if (isOmitted(member)) continue;
+    text += `${text.length > 1 ? ',' : ''}${JSON.stringify(key)}:${write(member)}`;
+  }
+  return `${text}}`;
 }
 
 /** SHA-256 (lower-case hex) over the canonical JSON of an entry's fields, prevHash included. */
