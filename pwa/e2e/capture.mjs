@@ -59,16 +59,26 @@ export function readCapture() {
     open.onerror = () => reject(open.error);
     open.onsuccess = () => {
       const names = ['cases', 'samples', 'handovers', 'notes', 'photos', 'scans', 'escalations', 'outbox'];
-      const tx = open.result.transaction(names);
+      const tx = open.result.transaction([...names, 'attachmentBytes']);
       const out = {};
       for (const name of names) {
         const all = tx.objectStore(name).getAll();
         all.onsuccess = () => {
-          out[name] = all.result.map(({ bytes, ...rest }) => ({ ...rest, byteLength: bytes?.byteLength }));
+          out[name] = all.result;
         };
       }
+      // Each attachment's file is kept in its own store; a photo row shows how many bytes of it the tablet holds.
+      const files = new Map();
+      const bytes = tx.objectStore('attachmentBytes').openCursor();
+      bytes.onsuccess = () => {
+        const cursor = bytes.result;
+        if (!cursor) return;
+        files.set(cursor.key, cursor.value.bytes.byteLength);
+        cursor.continue();
+      };
       tx.oncomplete = () => {
         open.result.close();
+        out.photos = out.photos.map((photo) => ({ ...photo, byteLength: files.get(photo.id) }));
         resolve(out);
       };
       tx.onerror = () => reject(tx.error);

@@ -16,6 +16,7 @@ import type { CaseCheckRow } from './caseChecksTable';
 import { syncMetaSchema, type SyncMetaRow } from './syncMetaTable';
 import { decisionsSchema, type DecisionRow } from './decisionsTable';
 import { escalationNotesSchema, type EscalationNoteRow } from './escalationNotesTable';
+import { attachmentBytesSchema, type AttachmentBytesRow } from './attachmentBytesTable';
 
 /** Siteband's on-device database; each later version bump adds its own upgrade step here. */
 export class SitebandDb extends Dexie {
@@ -34,6 +35,7 @@ export class SitebandDb extends Dexie {
   caseChecks!: EntityTable<CaseCheckRow, 'id'>;
   decisions!: EntityTable<DecisionRow, 'id'>;
   escalationNotes!: EntityTable<EscalationNoteRow, 'id'>;
+  attachmentBytes!: EntityTable<AttachmentBytesRow, 'id'>;
 
   constructor(name = DB_NAME) {
     super(name);
@@ -71,6 +73,19 @@ export class SitebandDb extends Dexie {
     this.version(7)
       .stores({ decisions: decisionsSchema, escalationNotes: escalationNotesSchema })
       .upgrade((tx) => tx.table('syncMeta').delete('pullCursor'));
+    // Version 8: attachment files move out of their rows into `attachmentBytes`, so the row's many small
+    // updates during a sync no longer copy the file. One file at a time, so the upgrade holds one in memory.
+    this.version(8)
+      .stores({ attachmentBytes: attachmentBytesSchema })
+      .upgrade(async (tx) => {
+        const photos = tx.table('photos');
+        const withBytes = (await photos.filter((row) => row.bytes !== undefined).primaryKeys()) as string[];
+        for (const id of withBytes) {
+          const { bytes, ...row } = await photos.get(id);
+          await tx.table('attachmentBytes').put({ id, bytes });
+          await photos.put({ ...row, bytesHeld: true });
+        }
+      });
   }
 }
 

@@ -14,13 +14,10 @@ export interface PhotoData {
   caption?: string | null;
 }
 
-/**
- * One row of the `photos` table, which holds every attachment (photos and raw scan files). The bytes are an ArrayBuffer rather than a Blob: every IndexedDB
- * implementation clones ArrayBuffers, while Blob support differs (the test database has none).
- */
+/** One row of the `photos` table, which holds every attachment (photos and raw scan files); the file itself is in `attachmentBytes`. */
 export interface PhotoRow extends CaptureRow<PhotoData> {
-  /** Absent for a photo another device took (only its metadata arrives by pull). */
-  bytes?: ArrayBuffer;
+  /** The file is on this tablet (in `attachmentBytes`); absent for a photo another device took (only its metadata arrives by pull). */
+  bytesHeld?: true;
   /** How many bytes the server holds; the upload resumes from here. */
   receivedBytes: number;
   /** ISO time the server verified the whole file; null until then. */

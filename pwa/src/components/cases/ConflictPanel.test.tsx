@@ -70,7 +70,7 @@ async function scanChangedElsewhere(server: TestServer) {
 async function scanChangedOnBothSides(server: TestServer) {
   const { db, caseId, scanId, synced, serverData } = await scanChangedElsewhere(server);
   const processing = { ...processingSettingsOf(synced.data, 'ir'), peakThresholdSigma: 6 };
-  const outcome = identify(storedRawFile((await db.photos.get(synced.data.rawAttachmentId))!)!, DEFAULT_SCAN_SETTINGS, processing);
+  const outcome = identify((await storedRawFile(db, (await db.photos.get(synced.data.rawAttachmentId))!))!, DEFAULT_SCAN_SETTINGS, processing);
   await saveScanEdit(db, { scan: synced, settings: DEFAULT_SCAN_SETTINGS, reidentified: { outcome, acknowledgedAt: '2026-04-01T09:30:00.000Z' }, check: 'keep' });
   await pushOutbox(db, clientFor(server), 'tablet-test');
   expect((await db.scans.get(scanId))?.sync).toBe('conflict');

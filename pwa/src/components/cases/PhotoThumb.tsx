@@ -1,8 +1,10 @@
 import { useEffect, useRef, useState } from 'react';
 import { IonButton } from '@ionic/react';
 import { useTranslation } from 'react-i18next';
+import { useLiveQuery } from 'dexie-react-hooks';
 import type { PhotoRow } from '../../db/photosTable';
 import { captureDb } from '../../features/cases/captureDb';
+import { heldBytes } from '../../features/photos/attachmentBytes';
 import { recordDelete } from '../../features/sync/recordChange';
 import { ConfirmDelete } from './ConfirmDelete';
 import { PhotoCaption } from './PhotoCaption';
@@ -16,12 +18,13 @@ export function PhotoThumb({ photo, alt, editable }: { photo: PhotoRow; alt: str
   const { t } = useTranslation();
   const [url, setUrl] = useState<string>();
   const viewer = useRef<HTMLDialogElement>(null);
+  const bytes = useLiveQuery(() => (photo.bytesHeld ? heldBytes(captureDb(), photo.id) : undefined), [photo.id, photo.bytesHeld]);
   useEffect(() => {
-    if (!photo.bytes) return undefined;
-    const next = URL.createObjectURL(new Blob([photo.bytes], { type: photo.data.contentType }));
+    if (!bytes) return undefined;
+    const next = URL.createObjectURL(new Blob([bytes], { type: photo.data.contentType }));
     setUrl(next);
     return () => URL.revokeObjectURL(next);
-  }, [photo.bytes, photo.data.contentType]);
+  }, [bytes, photo.data.contentType]);
   return (
     <figure className="sb-photo" data-testid="photo" data-photo-id={photo.id} data-sha256={photo.data.sha256}>
       {url ? (

@@ -2,6 +2,7 @@ import { useEffect, useMemo, useState } from 'react';
 import { IonButton, IonIcon } from '@ionic/react';
 import { createOutline, saveOutline } from 'ionicons/icons';
 import { useTranslation } from 'react-i18next';
+import { useLiveQuery } from 'dexie-react-hooks';
 import { REFERENCE_STANDARDS, type IdentifyResult } from '@siteband/shared';
 import type { PhotoRow } from '../../db/photosTable';
 import type { ScanRow } from '../../db/scansTable';
@@ -25,7 +26,8 @@ type CheckChoice = 'keep' | 'inForce' | 'none';
 /** A saved scan's settings corrected in place; whatever the likely compounds depend on runs them again from the raw file. */
 function ScanEditor({ scan, raw, onClose }: { scan: ScanRow; raw: PhotoRow | null; onClose: (message: string | null) => void }) {
   const { t, i18n } = useTranslation();
-  const rawFile = useMemo(() => storedRawFile(raw), [raw]);
+  // undefined while the file is read from the tablet's storage, null when only its metadata is here.
+  const rawFile = useLiveQuery(() => storedRawFile(captureDb(), raw), [raw?.id, raw?.bytesHeld]);
   const [settings, setSettings] = useState<ScanSettings>(() => scanSettingsOf(scan.data));
   const startFrom = useMemo(() => processingSettingsOf(scan.data, settings.technique), [scan.data, settings.technique]);
   const { state, processing, setProcessing, chooseFile, file } = useScanIdentification(identifyClient, settings, useLibraryInForce());
@@ -84,7 +86,7 @@ function ScanEditor({ scan, raw, onClose }: { scan: ScanRow; raw: PhotoRow | nul
   return (
     <>
       <p>{t('scanEdit.intro')}</p>
-      {rawFile ? <ScanSettingsForm value={settings} onChange={setSettings} /> : <p className="sb-notice">{t('scanEdit.noRawFile')}</p>}
+      {rawFile ? <ScanSettingsForm value={settings} onChange={setSettings} /> : rawFile === null && <p className="sb-notice">{t('scanEdit.noRawFile')}</p>}
       {settings.technique === 'raman' && <LaserCaution />}
       <fieldset className="sb-choice">
         <legend>{t('scanEdit.checkLegend')}</legend>

@@ -4,6 +4,7 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { openDb, type SitebandDb } from '../../db/db';
 import { saveCase } from '../cases/saveCase';
 import { addPhoto } from '../photos/addPhoto';
+import { heldBytes } from '../photos/attachmentBytes';
 import { saveSample } from '../samples/saveSample';
 import { exportCaseArchive, archiveFileName } from './exportCaseArchive';
 import { importCaseArchive } from './importCaseArchive';
@@ -60,7 +61,8 @@ describe('case archives on the tablet', () => {
     expect((await b.samples.get(sampleId))?.data).toEqual((await a.samples.get(sampleId))?.data);
     expect((await b.photos.get(photoId))?.data).toMatchObject({ caption: 'Split sack, bay 3' });
     const photo = await b.photos.get(photoId);
-    expect(new Uint8Array(photo!.bytes!)).toEqual(new Uint8Array(photoBytes));
+    expect(photo?.bytesHeld).toBe(true);
+    expect(new Uint8Array((await heldBytes(b, photoId))!)).toEqual(new Uint8Array(photoBytes));
     expect(photo?.data.sha256).toBe((await a.photos.get(photoId))?.data.sha256);
 
     const again = await importCaseArchive(b, exported.bytes, inspector.id);

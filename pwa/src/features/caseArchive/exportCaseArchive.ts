@@ -2,7 +2,7 @@ import { isLive } from '../../db/captureRecord';
 import { ARCHIVE_ENTITIES, buildCaseArchive, IDENTIFY_METHOD_VERSION, type ArchiveAuthor, type ArchiveRecord } from '@siteband/shared';
 import { version as APP_VERSION } from '../../../package.json';
 import type { SitebandDb } from '../../db/db';
-import type { PhotoRow } from '../../db/photosTable';
+import { heldBytes } from '../photos/attachmentBytes';
 import { captureScope, tableFor } from '../sync/captureTables';
 import { entriesFor, refreshSyncState } from '../sync/syncState';
 
@@ -60,7 +60,7 @@ export async function exportCaseArchive(db: SitebandDb, caseId: string, author: 
           changeId: only?.changeId ?? null,
           data: (only?.data ?? row.data) as Record<string, unknown>,
         });
-        const bytes = entity === 'attachment' ? (row as PhotoRow).bytes : undefined;
+        const bytes = entity === 'attachment' ? await heldBytes(db, row.id) : undefined;
         if (bytes) files.set(row.id, new Uint8Array(bytes));
       }
     }

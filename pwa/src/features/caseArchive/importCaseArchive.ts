@@ -70,9 +70,10 @@ export async function importCaseArchive(db: SitebandDb, bytes: Uint8Array, userI
         version: record.version,
         sync: 'local',
         editedAt: now,
-        ...(record.entity === 'attachment' ? { receivedBytes: 0, uploadedAt: null, ...(file ? { bytes: file.slice().buffer } : {}) } : {}),
+        ...(record.entity === 'attachment' ? { receivedBytes: 0, uploadedAt: null, ...(file ? { bytesHeld: true } : {}) } : {}),
       };
       await table.add(row);
+      if (record.entity === 'attachment' && file) await db.attachmentBytes.put({ id: record.id, bytes: file.slice().buffer });
       const changeId = changeIds.get(record);
       if (changeId) {
         // Sending, not pending: a later edit must become a change of its own, never be folded into this changeId.

@@ -26,7 +26,7 @@ export async function addPhoto(
     sha256: await sha256Hex(photo.bytes),
     caption,
   };
-  await recordUpsert(db, { entity: 'attachment', id, caseId: owner.caseId, data, extra: { bytes: photo.bytes, receivedBytes: 0, uploadedAt: null } });
+  await recordUpsert(db, { entity: 'attachment', id, caseId: owner.caseId, data, bytes: photo.bytes, extra: { receivedBytes: 0, uploadedAt: null } });
   return id;
 }
 

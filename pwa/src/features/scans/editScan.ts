@@ -6,6 +6,7 @@ import type { PhotoRow } from '../../db/photosTable';
 import type { ScanData, ScanRow } from '../../db/scansTable';
 import type { IdentifyOutcome, ScanFile } from '../identify/protocol';
 import { DEFAULT_PROCESSING, DEFAULT_SCAN_SETTINGS, type ProcessingSettings, type ScanSettings } from '../identify/scanSettings';
+import { heldBytes } from '../photos/attachmentBytes';
 import { captureScope } from '../sync/captureTables';
 import { recordUpsert } from '../sync/recordChange';
 import { escalationData } from './escalationData';
@@ -53,8 +54,9 @@ export function identificationChanged(data: ScanData, settings: ScanSettings): b
 }
 
 /** The scan's raw file as kept on the tablet, byte for byte, ready for the worker; null when only its metadata is here. */
-export function storedRawFile(raw: PhotoRow | null): ScanFile | null {
-  return raw?.bytes ? { name: raw.data.fileName, bytes: raw.bytes } : null;
+export async function storedRawFile(db: SitebandDb, raw: PhotoRow | null): Promise<ScanFile | null> {
+  const bytes = raw?.bytesHeld ? await heldBytes(db, raw.id) : undefined;
+  return raw && bytes ? { name: raw.data.fileName, bytes } : null;
 }
 
 /** A change to a saved scan, as the scan page hands it over. */

@@ -10,6 +10,7 @@ import type { ScanFile } from '../identify/protocol';
 import { DEFAULT_PROCESSING, DEFAULT_SCAN_SETTINGS, type ScanSettings } from '../identify/scanSettings';
 import { fixtureScan, identify } from '../identify/testFixtures';
 import { saveSample } from '../samples/saveSample';
+import { heldBytes } from '../photos/attachmentBytes';
 import { mergePulled } from '../sync/mergePulled';
 import { createSyncEngine } from '../sync/syncEngine';
 import { everythingSynced } from '../sync/syncState';
@@ -55,7 +56,8 @@ describe('saving a scan', () => {
     expect(scan).toMatchObject({ caseId, sync: 'local', data: { sampleId, technique: 'raman', excitationNm: 785, rawAttachmentId: saved.attachmentId, rawSha256: expectedHash, instrumentCheckId: null } });
     const raw = (await d.photos.get(saved.attachmentId)) as PhotoRow;
     expect(raw.data).toEqual({ ownerType: 'scan', ownerId: saved.scanId, kind: 'raw-scan', fileName: file.name, contentType: 'text/csv', size: file.bytes.byteLength, sha256: expectedHash });
-    expect(new Uint8Array(raw.bytes!)).toEqual(new Uint8Array(file.bytes));
+    expect(raw.bytesHeld).toBe(true);
+    expect(new Uint8Array((await heldBytes(d, raw.id))!)).toEqual(new Uint8Array(file.bytes));
 
     expect(saved.escalationId).not.toBeNull();
     const escalation = await d.escalations.get(saved.escalationId!);
@@ -155,7 +157,7 @@ describe('changing a saved scan', () => {
     await d.outbox.clear();
     const scan = (await d.scans.get(saved.scanId))!;
     const raw = (await d.photos.get(saved.attachmentId))!;
-    return { d, caseId, saved, scan, raw, rawBefore: new Uint8Array(raw.bytes!).slice() };
+    return { d, caseId, saved, scan, raw, rawBefore: new Uint8Array((await heldBytes(d, raw.id))!).slice() };
   }
 
   it('re-runs the identification from the stored raw file with the new phase and stores the new result, acknowledged anew', async () => {
@@ -170,7 +172,7 @@ describe('changing a saved scan', () => {
 
     const processing = processingSettingsOf(scan.data, settings.technique);
     expect(processing.baselineLambda).toBe((scan.data.result.processing as { baseline: { lambda: number } }).baseline.lambda);
-    const outcome = identify(storedRawFile(raw)!, settings, processing);
+    const outcome = identify((await storedRawFile(d, raw))!, settings, processing);
     expect(outcome.result.phase).toBe('gas');
     await saveScanEdit(d, { scan, settings, reidentified: { outcome, acknowledgedAt: '2026-04-01T09:00:00.000Z' }, check: 'keep' });
 
@@ -184,7 +186,7 @@ describe('changing a saved scan', () => {
     expect(after.serverCheck).toBeUndefined();
     // The raw file is kept byte for byte and not queued again.
     const rawAfter = (await d.photos.get(raw.id))!;
-    expect(new Uint8Array(rawAfter.bytes!)).toEqual(rawBefore);
+    expect(new Uint8Array((await heldBytes(d, rawAfter.id))!)).toEqual(rawBefore);
     expect(rawAfter.data).toEqual(raw.data);
     const outbox = await d.outbox.toArray();
     expect(outbox.map((e) => [e.entity, e.id, e.op, e.status])).toEqual([['scan', saved.scanId, 'upsert', 'pending']]);
@@ -193,7 +195,7 @@ describe('changing a saved scan', () => {
 
   it('keeps the old values when the raw file cannot be read as the new technique', async () => {
     const { d, saved, scan, raw } = await savedScan('synthetic-ir-ethanol-liquid.csv', ir);
-    const response = handleRequest({ id: 2, kind: 'identify', file: storedRawFile(raw)!, scan: raman, processing: processingSettingsOf(scan.data, 'raman') });
+    const response = handleRequest({ id: 2, kind: 'identify', file: (await storedRawFile(d, raw))!, scan: raman, processing: processingSettingsOf(scan.data, 'raman') });
     expect(response).toMatchObject({ ok: false, error: { code: 'import' } });
     expect(!response.ok && response.error.message).toMatch(/IR/);
     expect(processingSettingsOf(scan.data, 'raman')).toEqual(DEFAULT_PROCESSING);
@@ -204,7 +206,7 @@ describe('changing a saved scan', () => {
   it('raises an escalation when the new result requires one, once, by the capture rule', async () => {
     const { d, caseId, saved, scan, raw } = await savedScan('synthetic-raman-ammonium-nitrate-785.csv', { ...raman, phase: 'gas' });
     expect(saved.escalationId).toBeNull();
-    const condensed = identify(storedRawFile(raw)!, raman);
+    const condensed = identify((await storedRawFile(d, raw))!, raman);
     expect(condensed.result.escalation.required).toBe(true);
     const first = await saveScanEdit(d, { scan, settings: raman, reidentified: { outcome: condensed, acknowledgedAt: '2026-04-01T09:10:00.000Z' }, check: 'keep' });
     expect(first.escalationId).not.toBeNull();

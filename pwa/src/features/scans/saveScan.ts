@@ -96,7 +96,7 @@ export async function saveScan(db: SitebandDb, scan: NewScan, now = Date.now()):
       inspectorAcknowledgedAt: scan.acknowledgedAt,
     };
     await recordUpsert(db, { entity: 'scan', id: scanId, caseId: scan.caseId, data }, now);
-    await recordUpsert(db, { entity: 'attachment', id: attachmentId, caseId: scan.caseId, data: attachment, extra: { bytes: file.bytes.slice(0), receivedBytes: 0, uploadedAt: null } }, now);
+    await recordUpsert(db, { entity: 'attachment', id: attachmentId, caseId: scan.caseId, data: attachment, bytes: file.bytes.slice(0), extra: { receivedBytes: 0, uploadedAt: null } }, now);
     if (escalation && escalationId) await recordUpsert(db, { entity: 'escalation', id: escalationId, caseId: scan.caseId, data: escalation }, now);
     return { scanId, attachmentId, escalationId, instrumentCheckId };
   });

@@ -1,6 +1,6 @@
 import type { SitebandDb } from '../../db/db';
 import type { OutboxRow } from '../../db/outboxTable';
-import { captureScope, tableFor } from './captureTables';
+import { captureScope, removeRecord, tableFor } from './captureTables';
 import { refreshSyncState } from './syncState';
 import type { ChangeResult } from './syncTypes';
 
@@ -16,7 +16,7 @@ export async function applyResult(db: SitebandDb, entry: OutboxRow, result: Chan
     if (status === 'applied' && entry.op === 'delete') {
       // The server confirmed the delete: only now does the record leave the tablet.
       await db.outbox.delete(entry.seq!);
-      await table.delete(entry.id);
+      await removeRecord(db, entry.entity, entry.id);
       return;
     } else if (status === 'applied') {
       await db.outbox.delete(entry.seq!);

@@ -25,9 +25,15 @@ export function tableFor(db: SitebandDb, entity: CaptureEntity): Table<CaptureRo
   return tables[entity] as unknown as Table<CaptureRow<unknown>, string>;
 }
 
-/** Every capture table plus the outbox: the scope of a transaction that writes a record and its change. */
+/** Every capture table, the attachments' files and the outbox: the scope of a transaction that writes a record and its change. */
 export function captureScope(db: SitebandDb) {
-  return [db.cases, db.samples, db.handovers, db.notes, db.photos, db.scans, db.escalations, db.caseChecks, db.outbox];
+  return [db.cases, db.samples, db.handovers, db.notes, db.photos, db.attachmentBytes, db.scans, db.escalations, db.caseChecks, db.outbox];
+}
+
+/** Takes a record off the tablet, an attachment with its file; call inside a transaction of `captureScope`. */
+export async function removeRecord(db: SitebandDb, entity: CaptureEntity, id: string): Promise<void> {
+  await tableFor(db, entity).delete(id);
+  if (entity === 'attachment') await db.attachmentBytes.delete(id);
 }
 
 /** The server's data reduced to the fields the tablet sends, so a taken-over record can be pushed again. */

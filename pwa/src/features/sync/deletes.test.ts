@@ -4,6 +4,7 @@ import { createApiClient, type ApiClient } from '../api/client';
 import { saveCase } from '../cases/saveCase';
 import { addNote, editNote } from '../notes/addNote';
 import { addPhoto } from '../photos/addPhoto';
+import { heldBytes } from '../photos/attachmentBytes';
 import { addHandover, saveSample } from '../samples/saveSample';
 import { mergePulled } from './mergePulled';
 import { nextBatch, pushOutbox } from './pushOutbox';
@@ -188,8 +189,10 @@ describe('deleting a record on the tablet', () => {
     await uploadAttachments(d, clientFor(server), sender);
     expect(server.uploads.has(photo)).toBe(false);
     expect((await d.photos.get(photo))?.deletePending).toBe(true);
+    expect(await heldBytes(d, photo)).toBeDefined();
     await pushOutbox(d, clientFor(server), 'tablet-test');
     expect(await d.photos.get(photo)).toBeUndefined();
+    expect(await heldBytes(d, photo), 'the file leaves with its record').toBeUndefined();
     expect(server.records.get(photo)?.record.deleted).toBe(true);
     expect(await everythingSynced(d)).toBe(true);
   });

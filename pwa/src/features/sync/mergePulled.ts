@@ -1,6 +1,6 @@
 import type { SitebandDb } from '../../db/db';
 import type { CaptureRow, ServerRecord } from '../../db/captureRecord';
-import { caseIdOf, captureScope, isCaptureEntity, tableFor, tabletData } from './captureTables';
+import { caseIdOf, captureScope, isCaptureEntity, removeRecord, tableFor, tabletData } from './captureTables';
 import { entriesFor, refreshSyncState } from './syncState';
 import { serverCheckOf } from '../scans/serverCheck';
 import { escalationServerStateOf, isServerWrittenEntity, mergeServerWritten, serverWrittenTables } from './serverWritten';
@@ -30,7 +30,7 @@ export async function mergePulled(db: SitebandDb, record: ServerRecord, now = Da
     if (local?.deletePending && record.deleted) {
       // Deleted on the server as on the tablet (our delete, its answer lost): nothing left to send.
       await db.outbox.bulkDelete(entries.map((e) => e.seq!));
-      await table.delete(record.id);
+      await removeRecord(db, entity, record.id);
       return 'stored';
     }
     if (local && entries.length > 0) {
@@ -40,7 +40,7 @@ export async function mergePulled(db: SitebandDb, record: ServerRecord, now = Da
       return 'conflict';
     }
     if (record.deleted) {
-      await table.delete(record.id);
+      await removeRecord(db, entity, record.id);
       return 'stored';
     }
     const caseId = (await caseIdOf(db, entity, record.id, record.data)) ?? String(record.data.caseId ?? '');

@@ -1,6 +1,6 @@
 import type { SitebandDb } from '../../db/db';
 import type { CaptureEntity, CaptureRow } from '../../db/captureRecord';
-import { captureScope, tableFor } from './captureTables';
+import { captureScope, removeRecord, tableFor } from './captureTables';
 import { entriesFor, refreshSyncState } from './syncState';
 
 /** What a screen hands over when the inspector saves a record. */
@@ -9,8 +9,10 @@ export interface RecordEdit<D> {
   id: string;
   caseId: string;
   data: D;
-  /** Extra columns of the row (a photo's bytes); not sent in the change. */
+  /** Extra columns of the row (an attachment's upload state); not sent in the change. */
   extra?: Record<string, unknown>;
+  /** An attachment's file, kept in `attachmentBytes` beside the row; never sent in the change. */
+  bytes?: ArrayBuffer;
 }
 
 /**
@@ -44,8 +46,10 @@ export async function recordUpsert<D extends object>(db: SitebandDb, edit: Recor
       editedAt: now,
       ...(existing?.conflictServer ? { conflictServer: existing.conflictServer } : {}),
       ...edit.extra,
+      ...(edit.bytes ? { bytesHeld: true } : {}),
     };
     await table.put({ ...existing, ...row } as CaptureRow<unknown>);
+    if (edit.bytes) await db.attachmentBytes.put({ id: edit.id, bytes: edit.bytes });
     const entries = await entriesFor(db, edit.entity, edit.id);
     // A refused change is superseded by this whole-record edit; its reason goes with it.
     await db.outbox.bulkDelete(entries.filter((e) => e.status === 'rejected').map((e) => e.seq!));
@@ -127,7 +131,7 @@ export async function dropNeverSent(db: SitebandDb, entity: CaptureEntity, id: s
     const entries = await entriesFor(db, entity, id);
     if (!row || row.version !== null || entries.some((e) => e.status === 'sending')) return false;
     await db.outbox.bulkDelete(entries.map((e) => e.seq!));
-    await table.delete(id);
+    await removeRecord(db, entity, id);
     return true;
   });
 }

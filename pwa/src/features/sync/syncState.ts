@@ -19,7 +19,7 @@ export function deriveSyncState(row: Pick<CaptureRow<unknown>, 'version'>, entri
 
 /** Where an attachment's bytes stand: still to upload, refused by the server, or nothing waiting. */
 function bytesState(photo: PhotoRow): 'none' | 'pending' | 'refused' {
-  if (photo.uploadedAt !== null || photo.bytes === undefined) return 'none';
+  if (photo.uploadedAt !== null || !photo.bytesHeld) return 'none';
   return photo.uploadRefused === undefined ? 'pending' : 'refused';
 }
 
@@ -43,5 +43,5 @@ export async function refreshSyncState(db: SitebandDb, entity: CaptureEntity, id
 /** True when nothing the tablet holds waits for the server (no outbox entry, no photo bytes left to upload). */
 export async function everythingSynced(db: SitebandDb): Promise<boolean> {
   if ((await db.outbox.count()) > 0) return false;
-  return (await db.photos.filter((p) => p.bytes !== undefined && p.uploadedAt === null).count()) === 0;
+  return (await db.photos.filter((p) => p.bytesHeld === true && p.uploadedAt === null).count()) === 0;
 }

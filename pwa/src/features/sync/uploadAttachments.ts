@@ -2,6 +2,7 @@ import type { SitebandDb } from '../../db/db';
 import type { PhotoRow } from '../../db/photosTable';
 import type { ApiClient } from '../api/client';
 import { ApiError } from '../api/apiError';
+import { heldBytes } from '../photos/attachmentBytes';
 import { refusalReason } from './refusal';
 import { refreshSyncState } from './syncState';
 import type { AttachmentStatus } from './syncTypes';
@@ -41,7 +42,7 @@ async function refuse(db: SitebandDb, id: string, reason: string): Promise<void>
  * (413, 415, a second 422) is stored on the attachment with its reason; any other failure is thrown for backoff.
  */
 export async function uploadAttachment(db: SitebandDb, api: ApiClient, sender: ByteSender, attachment: PhotoRow): Promise<void> {
-  const bytes = attachment.bytes;
+  const bytes = await heldBytes(db, attachment.id);
   if (!bytes) return;
   const size = bytes.byteLength;
   let offset = attachment.receivedBytes;
@@ -89,7 +90,7 @@ export const PARALLEL_UPLOADS = 4;
  * thrown once the files in flight have finished.
  */
 export async function uploadAttachments(db: SitebandDb, api: ApiClient, sender: ByteSender): Promise<number> {
-  const waiting = await db.photos.filter((p) => p.version !== null && p.uploadedAt === null && p.bytes !== undefined && p.uploadRefused === undefined && p.deletePending === undefined).toArray();
+  const waiting = await db.photos.filter((p) => p.version !== null && p.uploadedAt === null && p.bytesHeld === true && p.uploadRefused === undefined && p.deletePending === undefined).toArray();
   const failures: unknown[] = [];
   let next = 0;
   async function worker(): Promise<void> {
