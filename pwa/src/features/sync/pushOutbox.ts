@@ -7,29 +7,57 @@ import { refusalReason } from './refusal';
 import { refreshSyncState } from './syncState';
 import { MAX_BATCH, type ChangeEnvelope, type ChangeResult } from './syncTypes';
 
+/** The changes of a batch sent to the server and not yet acted on: their records wait out of later batches. */
+export interface InFlight {
+  /** `entity:id` of each record the batch changes. */
+  records: ReadonlySet<string>;
+  changeIds: ReadonlySet<string>;
+}
+
+const recordKey = (entry: Pick<OutboxRow, 'entity' | 'id'>) => `${entry.entity}:${entry.id}`;
+
 /**
  * The next batch: outbox order (the order the inspector made the changes, so a case comes before
  * its samples and a submit after the samples it covers), at most one change per record, since a
- * record's next change needs the version the previous one gets.
+ * record's next change needs the version the previous one gets. With a batch in flight, its changes
+ * are left out and the new batch ends before the first later change of one of its records: nothing
+ * reaches the server ahead of a change it came after that still waits for its turn.
  */
-export async function nextBatch(db: SitebandDb, limit = MAX_BATCH): Promise<OutboxRow[]> {
+export async function nextBatch(db: SitebandDb, limit = MAX_BATCH, inFlight?: InFlight): Promise<OutboxRow[]> {
   const seen = new Set<string>();
   const batch: OutboxRow[] = [];
-  await db.outbox.orderBy('seq').each((entry) => {
-    const key = `${entry.entity}:${entry.id}`;
-    if (seen.has(key)) return;
-    seen.add(key);
-    if (batch.length < limit && (entry.status === 'pending' || entry.status === 'sending')) batch.push(entry);
-  });
+  let cut = false;
+  // Read only as far as the batch fills: what lies beyond waits for a later batch anyway.
+  await db.outbox
+    .orderBy('seq')
+    .until(() => cut || batch.length >= limit)
+    .each((entry) => {
+      const key = recordKey(entry);
+      if (inFlight?.records.has(key)) {
+        if (!inFlight.changeIds.has(entry.changeId)) cut = true;
+        return;
+      }
+      if (seen.has(key)) return;
+      seen.add(key);
+      if (entry.status === 'pending' || entry.status === 'sending') batch.push(entry);
+    });
   return batch;
+}
+
+/** A batch ready to go: its outbox entries and, in the same order, the envelopes sent for them. */
+interface Prepared {
+  batch: OutboxRow[];
+  changes: ChangeEnvelope[];
 }
 
 /**
  * Fixes each change's base version when it is first sent and marks it sending, so a re-send after a
  * lost answer carries exactly the same envelope and the server answers `duplicate`.
  */
-async function markSending(db: SitebandDb, batch: OutboxRow[]): Promise<ChangeEnvelope[]> {
-  return db.transaction('rw', captureScope(db), async () => {
+async function prepare(db: SitebandDb, inFlight?: InFlight): Promise<Prepared> {
+  const batch = await nextBatch(db, MAX_BATCH, inFlight);
+  if (batch.length === 0) return { batch, changes: [] };
+  const changes = await db.transaction('rw', captureScope(db), async () => {
     const envelopes: ChangeEnvelope[] = [];
     for (const entry of batch) {
       let baseVersion = entry.baseVersion;
@@ -40,30 +68,31 @@ async function markSending(db: SitebandDb, batch: OutboxRow[]): Promise<ChangeEn
     }
     return envelopes;
   });
+  return { batch, changes };
 }
+
+/** What the server said of one change: its result, or a refusal of the change as a request (too large, malformed). */
+type Answer = { entry: OutboxRow; result: ChangeResult } | { entry: OutboxRow; refused: string };
 
 /** Notes a failed delivery on the changes of the batch; they stay sending, to be re-sent unchanged. */
 async function noteFailure(db: SitebandDb, batch: OutboxRow[], message: string): Promise<void> {
   await db.outbox.bulkUpdate(batch.map((entry) => ({ key: entry.seq!, changes: { lastError: message } })));
 }
 
-/** Marks a change the server refused as a request (too large, malformed) as rejected, with its reason. */
+/** Marks a change the server refused as a request as rejected, with its reason. */
 async function refuse(db: SitebandDb, entry: OutboxRow, reason: string): Promise<void> {
-  await db.transaction('rw', captureScope(db), async () => {
-    await db.outbox.update(entry.seq!, { status: 'rejected', lastError: reason });
-    if (entry.op === 'delete') await tableFor(db, entry.entity).update(entry.id, { deletePending: undefined });
-    await refreshSyncState(db, entry.entity, entry.id);
-  });
+  await db.outbox.update(entry.seq!, { status: 'rejected', lastError: reason });
+  if (entry.op === 'delete') await tableFor(db, entry.entity).update(entry.id, { deletePending: undefined });
+  await refreshSyncState(db, entry.entity, entry.id);
 }
 
 /**
- * Sends one batch and acts on the answers. When the server refuses the batch as a whole (400, 413:
+ * Sends one batch and collects the answers. When the server refuses the batch as a whole (400, 413:
  * one change too large or malformed), the batch is split in halves, in order, until the refused
- * change is alone: it is marked rejected with the server's reason and every other change goes through.
- * A passing failure (no connection, 5xx) leaves the batch sending and is thrown, for the engine's backoff.
+ * change is alone: it is answered refused with the server's reason and every other change goes through.
+ * A passing failure (no connection, 5xx) notes the error on the changes not answered, which stay sending, and is thrown.
  */
-async function deliver(db: SitebandDb, api: ApiClient, clientId: string, batch: OutboxRow[]): Promise<number> {
-  const changes = await markSending(db, batch);
+async function send(db: SitebandDb, api: ApiClient, clientId: string, { batch, changes }: Prepared, answers: Answer[]): Promise<void> {
   let results: ChangeResult[];
   try {
     ({ results } = await api.request<{ results: ChangeResult[] }>('/api/sync/push', {
@@ -77,27 +106,81 @@ async function deliver(db: SitebandDb, api: ApiClient, clientId: string, batch: 
       throw error;
     }
     if (batch.length === 1) {
-      await refuse(db, batch[0], reason);
-      return 1;
+      answers.push({ entry: batch[0], refused: reason });
+      return;
     }
     const half = Math.ceil(batch.length / 2);
-    return (await deliver(db, api, clientId, batch.slice(0, half))) + (await deliver(db, api, clientId, batch.slice(half)));
+    await send(db, api, clientId, { batch: batch.slice(0, half), changes: changes.slice(0, half) }, answers);
+    await send(db, api, clientId, { batch: batch.slice(half), changes: changes.slice(half) }, answers);
+    return;
   }
   const byChange = new Map(results.map((r) => [r.changeId, r]));
-  let unanswered = 0;
   for (const entry of batch) {
     const result = byChange.get(entry.changeId);
-    if (result) await applyResult(db, entry, result);
-    else unanswered += 1;
+    if (result) answers.push({ entry, result });
   }
-  // Sending the rest again at once would loop for as long as the server keeps leaving them out.
-  if (unanswered > 0) throw new Error(`The server answered ${batch.length - unanswered} of ${batch.length} changes; the others are sent again later`);
-  return results.length;
 }
 
-/** Pushes the outbox in batches until nothing sendable is left; returns how many changes were answered. */
+/**
+ * Acts on the answers in one transaction (each record's own step stays all or nothing within it) and
+ * returns how many there were. Changes the server left out stay sending; sending them again at once
+ * would loop for as long as the server keeps leaving them out, so that is thrown.
+ */
+async function act(db: SitebandDb, answers: Answer[], sent: number): Promise<number> {
+  await db.transaction('rw', captureScope(db), async () => {
+    for (const answer of answers) {
+      if ('result' in answer) await applyResult(db, answer.entry, answer.result);
+      else await refuse(db, answer.entry, answer.refused);
+    }
+  });
+  if (answers.length < sent) throw new Error(`The server answered ${answers.length} of ${sent} changes; the others are sent again later`);
+  return answers.length;
+}
+
+/** Sends a prepared batch; what was answered before a passing failure is acted on before the failure is thrown. */
+async function deliver(db: SitebandDb, api: ApiClient, clientId: string, prepared: Prepared): Promise<Answer[]> {
+  const answers: Answer[] = [];
+  try {
+    await send(db, api, clientId, prepared, answers);
+  } catch (error) {
+    if (answers.length > 0) await act(db, answers, answers.length);
+    throw error;
+  }
+  return answers;
+}
+
+/**
+ * Pushes the outbox in batches until nothing sendable is left; returns how many changes were answered.
+ * Batches reach the server one after the other, in order; while the server works on one, the tablet acts
+ * on the answer to the one before and readies the next, so neither side waits on the other's work.
+ */
 export async function pushOutbox(db: SitebandDb, api: ApiClient, clientId: string): Promise<number> {
   let answered = 0;
-  for (let batch = await nextBatch(db); batch.length > 0; batch = await nextBatch(db)) answered += await deliver(db, api, clientId, batch);
+  // Acting on the previous answer; the batch after next is readied only once it is done.
+  let acting: Promise<void> = Promise.resolve();
+  let current = await prepare(db);
+  while (current.batch.length > 0) {
+    const { batch } = current;
+    const inFlight: InFlight = { records: new Set(batch.map(recordKey)), changeIds: new Set(batch.map((e) => e.changeId)) };
+    const [sent, following] = await Promise.allSettled([deliver(db, api, clientId, current), acting.then(() => prepare(db, inFlight))]);
+    if (sent.status === 'rejected') throw sent.reason;
+    if (following.status === 'rejected') {
+      // The answer in hand is kept before the earlier failure is thrown.
+      await act(db, sent.value, batch.length).catch(() => undefined);
+      throw following.reason;
+    }
+    acting = act(db, sent.value, batch.length).then((n) => {
+      answered += n;
+    });
+    current = following.value;
+    if (current.batch.length === 0) {
+      // Nothing could go beside the batch in flight (what is left waits on its records): once it is
+      // acted on, look again.
+      await acting;
+      acting = Promise.resolve();
+      current = await prepare(db);
+    }
+  }
+  await acting;
   return answered;
 }

@@ -124,6 +124,54 @@ describe('pushing the outbox', () => {
     expect((await d.cases.get(caseId))?.version).toBe(1);
   }, 60_000);
 
+  it('readies the next batch while the server works on one, and sends the batches one after the other', async () => {
+    const d = await fresh();
+    const server = createTestServer();
+    const caseId = crypto.randomUUID();
+    await saveCase(d, caseId, caseData());
+    for (let i = 0; i < 250; i += 1) await saveSample(d, crypto.randomUUID(), sampleData(caseId, `S-${i}`));
+    const sending = () => d.outbox.where('status').equals('sending').count();
+    let inFlight = 0;
+    let mostInFlight = 0;
+    let sendingWhileFirstInFlight = -1;
+    const fetchFn: typeof fetch = async (input, init) => {
+      if (!String(input).startsWith('/api/sync/push')) return server.fetch(input, init);
+      inFlight += 1;
+      mostInFlight = Math.max(mostInFlight, inFlight);
+      try {
+        if (server.pushes.length === 0) {
+          // The first answer is held (at most 5 s) until the tablet has readied the second batch beside it.
+          for (let k = 0; k < 500 && (await sending()) < 251; k += 1) await new Promise((resolve) => setTimeout(resolve, 10));
+          sendingWhileFirstInFlight = await sending();
+        }
+        return await server.fetch(input, init);
+      } finally {
+        inFlight -= 1;
+      }
+    };
+    const tokens = { current: () => ({ accessToken: 'a', refreshToken: 'r' }), save: async () => undefined, clear: async () => undefined };
+    expect(await pushOutbox(d, createApiClient({ tokens, fetchFn }), 'tablet-test')).toBe(251);
+    expect(sendingWhileFirstInFlight).toBe(251);
+    expect(mostInFlight).toBe(1);
+    expect(server.pushes.map((b) => b.length)).toEqual([200, 51]);
+    expect(await d.outbox.count()).toBe(0);
+  }, 60_000);
+
+  it('readies no change beside a batch in flight that came after a waiting change of one of its records', async () => {
+    const d = await fresh();
+    const caseId = crypto.randomUUID();
+    const [first, second] = [crypto.randomUUID(), crypto.randomUUID()];
+    await saveCase(d, caseId, caseData());
+    await saveSample(d, first, sampleData(caseId, 'S-1'));
+    await saveCase(d, caseId, caseData({ status: 'submitted' }));
+    await saveSample(d, second, sampleData(caseId, 'S-2'));
+    const [opening] = await d.outbox.orderBy('seq').toArray();
+    const inFlight = { records: new Set([`case:${caseId}`]), changeIds: new Set([opening.changeId]) };
+    // S-2 came after the submit, which waits for the case's change in flight: it waits too.
+    expect((await nextBatch(d, 200, inFlight)).map((e) => e.id)).toEqual([first]);
+    expect((await nextBatch(d)).map((e) => e.id)).toEqual([caseId, first, second]);
+  });
+
   it('re-sends the same changeIds after a lost answer, so the server writes each record once', async () => {
     const d = await fresh();
     const server = createTestServer();
