@@ -1,6 +1,7 @@
 import { randomBytes, randomUUID } from 'node:crypto';
 import { GetObjectCommand } from '@aws-sdk/client-s3';
 import { ScanRecomputeQueue } from '../src/scans/scan-recompute.queue';
+import { ChangeApplier } from '../src/sync/change-applier';
 import { createS3Client } from '../src/storage/object-storage.service';
 import { demo, pullAll, push, remove, sha256, upsert, uploadWhole } from './support/field-records';
 import { startS3Fake, type S3Fake } from './support/s3-fake';
@@ -253,6 +254,35 @@ describe('Sync push and pull (e2e, MariaDB + S3 fake)', () => {
     expect(results[6].reason).toBe(`Case ${caseId} is submitted: reopen it before changing what belongs to it`);
     expect(await count('attachments', 'id = ?', [rawId])).toBe(0);
     expect(await count('samples', 'id = ?', [lateSampleId])).toBe(0);
+  });
+
+  it('counts the records a batch has just made below a record it is asked to delete', async () => {
+    const caseId = await openCase();
+    const sampleId = randomUUID();
+    const results = await push(t, inspector, [
+      upsert('sample', sampleId, demo.sample(caseId)),
+      upsert('attachment', randomUUID(), demo.photo('sample', sampleId, randomBytes(1_000))),
+      remove('sample', sampleId, 1),
+    ]);
+    expect(results.map((result) => result.status)).toEqual(['applied', 'applied', 'rejected']);
+    expect(results[2].reason).toContain('photo');
+    expect((await t.dataSource.query('SELECT deletedAt FROM samples WHERE id = ?', [sampleId]))[0]).toEqual({ deletedAt: null });
+  });
+
+  it('stores a batch of new records too large for one statement to the database, every record once', async () => {
+    const caseId = await openCase();
+    const sampleId = randomUUID();
+    // About 17 MB of scan results: more than MariaDB takes in one statement (max_allowed_packet, 16 MiB by default).
+    const scans = Array.from({ length: 90 }, (_, n) =>
+      upsert('scan', randomUUID(), demo.scan(sampleId, { result: { codeVersion: '0.1.0', libraryVersion: 'demo-1', parameters: {}, note: `${n} ${'x'.repeat(190_000)}` } })),
+    );
+    const me = (await t.http().get('/api/me').set('Authorization', `Bearer ${inspector}`)).body;
+    const changes = [upsert('sample', sampleId, demo.sample(caseId)), ...scans].map((change) => ({ ...change }));
+    const results = await t.app.get(ChangeApplier).applyBatch(changes, { clientId: 'e2e', batchId: randomUUID() }, me);
+    expect(results.map((result) => result.status)).toEqual(Array(91).fill('applied'));
+    const stored: { id: string; chars: number }[] = await t.dataSource.query('SELECT id, LENGTH(result) AS chars FROM scans WHERE sampleId = ?', [sampleId]);
+    expect(stored.map((row) => row.id).sort()).toEqual(scans.map((scan) => scan.id).sort());
+    for (const row of stored) expect(Number(row.chars)).toBeGreaterThan(190_000);
   });
 
   it('passes deletions on as tombstones and keeps hand-overs and instrument checks permanent', async () => {

@@ -45,7 +45,7 @@ export function canSeeCase(user: AuthenticatedUser, row: Case): boolean {
  * (a submitted case is frozen until the inspector reopens it).
  */
 export async function writableCase(ctx: ChangeContext, caseId: string): Promise<Case> {
-  const row = await ctx.reads.findOne(Case, caseId);
+  const row = await ctx.rows.findOne(Case, caseId);
   if (!row) throw new ChangeRejected(`Case ${caseId} is not on the server: push the case before what belongs to it`);
   assertOwnCase(row, ctx.user);
   if (row.deletedAt) throw new ChangeRejected(`Case ${caseId} was deleted`);

@@ -9,5 +9,5 @@ export type ScanLinks = Pick<Scan, keyof typeof SCAN_LINK_COLUMNS>;
 
 /** A scan as the parent of a change (an attachment, an escalation), as read in the change's batch; null when not on the server. */
 export function scanLinks(ctx: ChangeContext, id: string): Promise<ScanLinks | null> {
-  return ctx.reads.findOne(Scan, id, SCAN_LINK_COLUMNS);
+  return ctx.rows.findOne(Scan, id, SCAN_LINK_COLUMNS);
 }

@@ -92,13 +92,13 @@ export const scanSyncHandler: SyncHandler<Scan, ScanDataDto> = {
  */
 async function checkLinks(ctx: ChangeContext, id: string, data: ScanDataDto, caseId: string): Promise<void> {
   if (data.instrumentCheckId) {
-    const check = await ctx.reads.findOne(InstrumentCheck, data.instrumentCheckId);
+    const check = await ctx.rows.findOne(InstrumentCheck, data.instrumentCheckId);
     if (!check || check.caseId !== caseId) {
       throw new ChangeRejected(`Instrument check ${data.instrumentCheckId} is not in case ${caseId}: push it first`);
     }
   }
   if (data.rawAttachmentId) {
-    const raw = await ctx.reads.findOne(Attachment, data.rawAttachmentId);
+    const raw = await ctx.rows.findOne(Attachment, data.rawAttachmentId);
     if (raw && (raw.ownerType !== 'scan' || raw.ownerId !== id || raw.kind !== 'raw-scan')) {
       throw new ChangeRejected(`Attachment ${raw.id} is not a raw-scan attachment of scan ${id}`);
     }

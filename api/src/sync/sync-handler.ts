@@ -1,6 +1,6 @@
 import type { EntityManager } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user';
-import type { BatchReads } from './batch-reads';
+import type { BatchRows } from './batch-rows';
 import type { SyncedRecord } from './synced-record';
 
 /** The kinds of record a client can pull; all but `decision` and `escalationNote` (written by the review and escalation routes) can be pushed too. */
@@ -36,8 +36,12 @@ export class ChangeRejected extends Error {
 export interface ChangeContext {
   manager: EntityManager;
   user: AuthenticatedUser;
-  /** Parents (case, sample, scan...) as read in this batch: look them up here rather than through `manager`. */
-  reads: BatchReads;
+  /**
+   * The batch's rows: look parents (case, sample, scan...) up here rather than through `manager`. The
+   * batch's new rows reach the database together, so a read through `manager` sees them only after
+   * `rows.flush()` (the change applier flushes before delete checks and listeners).
+   */
+  rows: BatchRows;
 }
 
 /** What a pull needs of one kind of record: its table, its case link and its client view. */
