@@ -112,6 +112,21 @@ describe('Attachment uploads (e2e, MariaDB + S3 fake)', () => {
     expect(staging[0].storageKey).toBe(`attachments/${caseId}/${id}`);
   });
 
+  it('gives a finished upload the next sync sequence number, so the next pull carries it', async () => {
+    const file = randomBytes(2_000);
+    const id = await declarePhoto(file);
+    const seqOf = async () => Number((await t.dataSource.query('SELECT syncSeq FROM attachments WHERE id = ?', [id]))[0].syncSeq);
+    const declared = await seqOf();
+    const [{ value: before }] = await t.dataSource.query('SELECT value FROM sync_counter');
+    await uploadWhole(t, inspector, id, file, 'image/jpeg').expect(200);
+    const [{ value: after }] = await t.dataSource.query('SELECT value FROM sync_counter');
+    expect(Number(after)).toBe(Number(before) + 1);
+    expect(await seqOf()).toBe(Number(after));
+    const pulled = (await pullAll(t, inspector)).changes.find((record) => record.id === id);
+    expect(pulled).toMatchObject({ syncSeq: Number(after), version: 1, data: { uploadedAt: expect.any(String) } });
+    expect(declared).toBeLessThan(Number(after));
+  });
+
   it('keeps nothing when the bytes do not match the declared SHA-256 (422), and accepts a clean retry', async () => {
     const file = randomBytes(4_000);
     const id = await declarePhoto(file);

@@ -15,7 +15,7 @@ import type { AuthenticatedUser } from '../auth/authenticated-user';
 import { whereCaseVisible } from '../cases/case-access';
 import { ScanRecomputeQueue } from '../scans/scan-recompute.queue';
 import { ObjectStorageService } from '../storage/object-storage.service';
-import { lockSyncCounter, takeSyncSeq } from '../sync/sync-sequence';
+import { lockAndTakeSyncSeq, lockSyncCounter } from '../sync/sync-sequence';
 import { ATTACHMENT_RULES, mediaType } from './attachment-limits';
 import { chunkKey, fileKey, stagingPrefix } from './attachment-storage-keys';
 import { attachmentDisposition } from './content-disposition';
@@ -133,9 +133,8 @@ export class AttachmentUploadsService {
     await this.storage.put(key, file, row.contentType);
     const uploadedAt = new Date();
     const moved = await this.dataSource.transaction(async (manager) => {
-      const counter = await lockSyncCounter(manager);
       // A new sequence number (not a new version) so other devices pull the upload state; edits are not in conflict with it.
-      const syncSeq = await takeSyncSeq(manager, counter);
+      const syncSeq = await lockAndTakeSyncSeq(manager);
       // Only if nothing moved since the row was read: the offset, and the declared file the bytes were checked against.
       const unchanged = { id: row.id, receivedBytes: start, size: row.size, sha256: row.sha256 };
       return manager.update(Attachment, unchanged, { receivedBytes: row.size, storageKey: key, uploadedAt, syncSeq });

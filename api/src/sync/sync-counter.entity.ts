@@ -3,7 +3,7 @@ import { BIGINT_AS_NUMBER } from './synced-record';
 
 /**
  * The one row holding the last sync sequence number handed out. Every synced write locks it
- * (SELECT … FOR UPDATE) until its transaction commits, so sequence numbers become visible in order and a
+ * (SELECT … FOR UPDATE, or the UPDATE that takes the next number) until its transaction commits, so sequence numbers become visible in order and a
  * pull cursor never skips a write that commits later.
  */
 @Entity({ name: 'sync_counter' })
