@@ -168,6 +168,20 @@ describe('Sync push and pull (e2e, MariaDB + S3 fake)', () => {
     expect((await t.http().get('/api/audit/verify').set('Authorization', `Bearer ${admin}`).expect(200)).body).toMatchObject({ ok: true });
   });
 
+  it('refuses a malformed batch as a whole with 400, naming what is wrong, and applies nothing', async () => {
+    const caseId = randomUUID();
+    const good = upsert('case', caseId, demo.case());
+    const send = (body: Record<string, unknown>) => t.http().post('/api/sync/push').set('Authorization', `Bearer ${inspector}`).send(body).expect(400);
+    const batch = { clientId: 'tablet-e2e', batchId: randomUUID() };
+    expect((await send({ ...batch, changes: [] })).body.message).toContain('changes must contain at least 1 elements');
+    expect((await send({ ...batch, changes: [good, 'case'] })).body.message).toContain('each value in changes must be an object');
+    expect((await send({ ...batch, changes: Array(201).fill(good) })).body.message).toContain('changes must contain no more than 200 elements');
+    expect((await send({ batchId: batch.batchId, changes: [good] })).body.message).toContain('clientId must be a string');
+    expect((await send({ ...batch, batchId: 'b-1', changes: [good] })).body.message).toContain('batchId must be a UUID');
+    expect((await send({ ...batch, changes: [good], extra: 1 })).body.message).toContain('property extra should not exist');
+    expect(await count('cases', 'id = ?', [caseId])).toBe(0);
+  });
+
   it('rejects only the invalid record of a batch, naming what is wrong', async () => {
     const caseId = await openCase();
     const good = upsert('note', randomUUID(), demo.note(caseId));

@@ -3,7 +3,7 @@ import { TakenAsIs } from './validate-data';
 
 /**
  * Refuses a JSON field whose serialised form is longer than `maxChars` (free-form JSON is bounded here).
- * The field is free-form, so `validateData` takes it as sent (`TakenAsIs`).
+ * The field is free-form, so it is taken as sent (`TakenAsIs`).
  */
 export function MaxJsonLength(maxChars: number, options?: ValidationOptions): PropertyDecorator {
   return (target: object, propertyName: string | symbol) => {

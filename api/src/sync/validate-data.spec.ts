@@ -1,7 +1,9 @@
 import 'reflect-metadata';
 import { SampleDataDto } from '../samples/dto/sample-data.dto';
 import { MAX_SCAN_JSON_CHARS, ScanDataDto } from '../scans/dto/scan-data.dto';
+import { createValidationPipe } from '../common/validation';
 import { ChangeEnvelopeDto } from './dto/change-envelope.dto';
+import { PushRequestDto } from './dto/push-request.dto';
 import { validateData } from './validate-data';
 
 const sample = {
@@ -71,5 +73,14 @@ describe('validateData', () => {
     expect(validateData(ChangeEnvelopeDto, { ...change, data: 'text' })).toEqual({ ok: false, problems: 'data must be an object' });
     const remove = validateData(ChangeEnvelopeDto, { ...change, op: 'delete', baseVersion: 2 });
     expect(remove.ok && remove.value.data).toBeUndefined();
+  });
+
+  it('lets the global pipe hand a batch its changes as sent, and still check them', async () => {
+    const pipe = createValidationPipe();
+    const body = { clientId: 'tablet-1', batchId: '0b5a7c1e-4d3f-4e2a-9b8c-1d2e3f4a5b6c', changes: [{ changeId: 'x', data: { result: { peaks: [1, 2] } } }] };
+    const batch = (await pipe.transform(body, { type: 'body', metatype: PushRequestDto })) as PushRequestDto;
+    expect(batch).toBeInstanceOf(PushRequestDto);
+    expect(batch.changes).toBe(body.changes);
+    await expect(pipe.transform({ ...body, changes: ['x'] }, { type: 'body', metatype: PushRequestDto })).rejects.toThrow('each value in changes must be an object');
   });
 });

@@ -1,30 +1,21 @@
-import { Exclude, plainToInstance } from 'class-transformer';
+import { plainToInstance, Transform, Type } from 'class-transformer';
 import { validateSync } from 'class-validator';
 import { toFieldErrors } from '../common/validation';
 
 /** Either the validated instance or one readable sentence listing every problem. */
 export type Validated<T> = { ok: true; value: T } | { ok: false; problems: string };
 
-/** The `TakenAsIs` properties of each class. */
-const TAKEN_AS_IS = new WeakMap<object, string[]>();
-
 /**
- * A property `validateData` hands over as sent, not copied member by member into the instance: free-form
- * JSON validated as a whole (a scan's result) or later on its own (a change's `data`). Its validators
- * still run on it.
+ * A property class-transformer hands over as sent, not copied member by member into the instance (by
+ * `validateData` and the global pipe alike): free-form JSON validated as a whole (a scan's result), or
+ * later on its own (a change's `data`, a batch's changes). Its validators still run on it. Taken as a
+ * string, which costs nothing, then replaced by the value sent.
  */
 export function TakenAsIs(): PropertyDecorator {
   return (target: object, property: string | symbol) => {
-    Exclude({ toClassOnly: true })(target, property);
-    TAKEN_AS_IS.set(target.constructor, [...(TAKEN_AS_IS.get(target.constructor) ?? []), String(property)]);
+    Type(() => String)(target, property);
+    Transform(({ obj, key }: { obj: Record<string, unknown>; key: string }) => obj[key], { toClassOnly: true })(target, property);
   };
-}
-
-/** The `TakenAsIs` properties of a class and of the classes it extends. */
-function takenAsIs(cls: object): string[] {
-  const names: string[] = [];
-  for (let c: object | null = cls; c && c !== Function.prototype; c = Object.getPrototypeOf(c)) names.push(...(TAKEN_AS_IS.get(c) ?? []));
-  return names;
 }
 
 /**
@@ -35,8 +26,6 @@ function takenAsIs(cls: object): string[] {
 export function validateData<T extends object>(cls: new () => T, plain: unknown): Validated<T> {
   if (plain === null || typeof plain !== 'object' || Array.isArray(plain)) return { ok: false, problems: 'must be an object' };
   const value = plainToInstance(cls, plain);
-  const record = plain as Record<string, unknown>;
-  for (const name of takenAsIs(cls)) if (Object.hasOwn(record, name)) (value as Record<string, unknown>)[name] = record[name];
   const errors = validateSync(value, { whitelist: true, forbidNonWhitelisted: true });
   if (errors.length === 0) return { ok: true, value };
   const problems = toFieldErrors(errors)

@@ -1,5 +1,6 @@
 import { ApiProperty } from '@nestjs/swagger';
 import { ArrayMaxSize, ArrayMinSize, IsArray, IsObject, IsString, IsUUID, Length } from 'class-validator';
+import { TakenAsIs } from '../validate-data';
 import { ChangeEnvelopeDto } from './change-envelope.dto';
 
 /** Most changes one push may carry; a client with more sends several batches. */
@@ -25,5 +26,6 @@ export class PushRequestDto {
   @ArrayMinSize(1)
   @ArrayMaxSize(MAX_CHANGES_PER_BATCH)
   @IsObject({ each: true })
+  @TakenAsIs()
   changes: Record<string, unknown>[];
 }
