@@ -270,6 +270,23 @@ describe('Sync push and pull (e2e, MariaDB + S3 fake)', () => {
     expect(await count('samples', 'id = ?', [lateSampleId])).toBe(0);
   });
 
+  it('rejects a change whose data names its parents by anything but a UUID, and applies the rest of the batch', async () => {
+    const caseId = await openCase();
+    const sampleId = randomUUID();
+    const results = await push(t, inspector, [
+      upsert('sample', sampleId, demo.sample(caseId)),
+      upsert('scan', randomUUID(), demo.scan('S-01')),
+      upsert('scan', randomUUID(), demo.scan(sampleId, { rawAttachmentId: 'raw-1', rawSha256: sha256(Buffer.from('x')) })),
+      upsert('attachment', randomUUID(), demo.photo('scan', 'scan-7', randomBytes(100))),
+      upsert('attachment', randomUUID(), demo.photo('sample', 42 as never, randomBytes(100))),
+      upsert('scan', randomUUID(), demo.scan(sampleId)),
+    ]);
+    expect(results.map((result) => result.status)).toEqual(['applied', 'rejected', 'rejected', 'rejected', 'rejected', 'applied']);
+    expect(results[1].reason).toContain('sampleId must be a UUID');
+    expect(results[2].reason).toContain('rawAttachmentId must be a UUID');
+    expect(results[3].reason).toContain('ownerId must be a UUID');
+  });
+
   it('counts the records a batch has just made below a record it is asked to delete', async () => {
     const caseId = await openCase();
     const sampleId = randomUUID();

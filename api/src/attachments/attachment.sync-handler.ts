@@ -1,7 +1,9 @@
 import { photoCaptionOf, photoCaptionProblem } from '@siteband/shared';
 import { writableCase } from '../cases/case-access';
 import { writableSample } from '../samples/sample-parent';
-import { scanLinks } from '../scans/scan-links';
+import { Sample } from '../samples/sample.entity';
+import { scanLinkRefs, scanLinks } from '../scans/scan-links';
+import { refsOf } from '../sync/batch-rows';
 import { ChangeRejected, type ChangeContext, type SyncHandler } from '../sync/sync-handler';
 import { contentTypeProblem, mediaType, sizeProblem } from './attachment-limits';
 import { Attachment } from './attachment.entity';
@@ -14,6 +16,8 @@ export const attachmentSyncHandler: SyncHandler<Attachment, AttachmentDataDto> =
   dataClass: AttachmentDataDto,
   caseColumn: 'caseId',
   appendOnly: false,
+
+  parentsOf: (data) => (data.ownerType === 'scan' ? scanLinkRefs([data.ownerId]) : data.ownerType === 'sample' ? refsOf(Sample, [data.ownerId]) : []),
 
   async authorize(ctx, id, data, existing) {
     if (existing && data && (data.ownerType !== existing.ownerType || data.ownerId !== existing.ownerId)) {

@@ -2,6 +2,8 @@ import { isDeepStrictEqual } from 'node:util';
 import { Attachment } from '../attachments/attachment.entity';
 import { writableSample } from '../samples/sample-parent';
 import { ReviewDecision } from '../review/review-decision.entity';
+import { Sample } from '../samples/sample.entity';
+import { refsOf } from '../sync/batch-rows';
 import { dependents, refuseWhileHeld } from '../sync/delete-guards';
 import { ChangeRejected, type ChangeContext, type SyncHandler } from '../sync/sync-handler';
 import { Escalation } from './escalation.entity';
@@ -17,6 +19,8 @@ export const scanSyncHandler: SyncHandler<Scan, ScanDataDto> = {
   dataClass: ScanDataDto,
   caseColumn: 'caseId',
   appendOnly: false,
+
+  parentsOf: (data) => [...refsOf(Sample, [data.sampleId]), ...refsOf(InstrumentCheck, [data.instrumentCheckId]), ...refsOf(Attachment, [data.rawAttachmentId])],
 
   async authorize(ctx, id, data, existing) {
     if (existing && data && data.sampleId !== existing.sampleId) {

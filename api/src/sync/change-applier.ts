@@ -1,8 +1,8 @@
 import { Inject, Injectable, Optional } from '@nestjs/common';
-import { DataSource, In, type EntityManager } from 'typeorm';
+import { DataSource, In } from 'typeorm';
 import { AuditService, type AuditRecordInput } from '../audit/audit.service';
 import type { AuthenticatedUser } from '../auth/authenticated-user';
-import { BatchRows } from './batch-rows';
+import { BatchRows, type RowRef } from './batch-rows';
 import { ChangeEnvelopeDto } from './dto/change-envelope.dto';
 import type { ChangeResultDto } from './dto/change-result.dto';
 import { SyncRecordDto } from './dto/sync-record.dto';
@@ -67,10 +67,10 @@ export class ChangeApplier {
       const counter = await lockSyncCounter(manager);
       const first = counter.value;
       const valid = envelopes.flatMap((envelope) => (envelope.ok ? [envelope.value] : []));
-      const writes: BatchWrites = { counter, audit: [], outcomes: new Map(), prefetched: await this.prefetch(manager, valid) };
+      const ctx: ChangeContext = { manager, user, rows: new BatchRows(manager) };
+      const writes: BatchWrites = { counter, audit: [], outcomes: new Map(), prefetched: await this.prefetch(ctx, valid) };
       const stored = valid.length ? await manager.findBy(SyncChange, { changeId: In([...new Set(valid.map((change) => change.changeId))]) }) : [];
       const previous = new Map(stored.map((row) => [row.changeId, row]));
-      const ctx: ChangeContext = { manager, user, rows: new BatchRows(manager) };
 
       const results: ChangeResultDto[] = [];
       for (const [i, envelope] of envelopes.entries()) {
@@ -122,8 +122,9 @@ export class ChangeApplier {
     });
   }
 
-  /** The rows the changes name, one query per kind of record. */
-  private async prefetch(manager: EntityManager, changes: ChangeEnvelopeDto[]): Promise<Map<string, SyncedRecord | null>> {
+  /** The rows the changes name, one query per kind of record; and the parents their data names, into `ctx.rows`. */
+  private async prefetch(ctx: ChangeContext, changes: ChangeEnvelopeDto[]): Promise<Map<string, SyncedRecord | null>> {
+    const parents: RowRef[] = [];
     const found = new Map<string, SyncedRecord | null>();
     const idsByEntity = new Map<SyncEntityName, Set<string>>();
     for (const change of changes) idsByEntity.set(change.entity, (idsByEntity.get(change.entity) ?? new Set()).add(change.id));
@@ -138,8 +139,12 @@ export class ChangeApplier {
       }
       // null: looked up and not on the server (a new record).
       for (const id of ids) found.set(`${entity}:${id}`, null);
-      for (const row of await manager.findBy(handler.target, { id: In([...ids]) })) found.set(`${entity}:${row.id}`, row);
+      for (const row of await ctx.manager.findBy(handler.target, { id: In([...ids]) })) found.set(`${entity}:${row.id}`, row);
+      for (const change of changes) {
+        if (change.entity === entity && change.op === 'upsert' && change.data) parents.push(...(handler.parentsOf?.(change.data) ?? []));
+      }
     }
+    await ctx.rows.prefetch(parents);
     return found;
   }
 

@@ -1,6 +1,6 @@
 import type { EntityManager } from 'typeorm';
 import type { AuthenticatedUser } from '../auth/authenticated-user';
-import type { BatchRows } from './batch-rows';
+import type { BatchRows, RowRef } from './batch-rows';
 import type { SyncedRecord } from './synced-record';
 
 /** The kinds of record a client can pull; all but `decision` and `escalationNote` (written by the review and escalation routes) can be pushed too. */
@@ -69,6 +69,11 @@ export interface SyncHandler<E extends SyncedRecord = SyncedRecord, D extends ob
    * returns the case id. Throws `ChangeRejected` otherwise.
    */
   authorize(ctx: ChangeContext, id: string, data: D | null, existing: E | null): Promise<string>;
+  /**
+   * The parents an upsert's `data` names, read for the whole batch before its first change (`authorize`
+   * then finds them in `ctx.rows`). `data` is not validated yet: only ids that are UUIDs are named.
+   */
+  parentsOf?(data: Record<string, unknown>): RowRef[];
   /**
    * Copies `data` onto the row; server-owned fields (case link, author, status...) are set when `isNew`.
    * Throws `ChangeRejected` on a forbidden change.
