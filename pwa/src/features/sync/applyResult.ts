@@ -1,6 +1,6 @@
 import type { SitebandDb } from '../../db/db';
 import type { OutboxRow } from '../../db/outboxTable';
-import { captureScope, removeRecord, tableFor } from './captureTables';
+import { captureScope, removeRecord } from './captureTables';
 import { refreshSyncState } from './syncState';
 import type { ChangeResult } from './syncTypes';
 
@@ -11,7 +11,6 @@ import type { ChangeResult } from './syncTypes';
  */
 export async function applyResult(db: SitebandDb, entry: OutboxRow, result: ChangeResult): Promise<void> {
   const status = result.status === 'duplicate' ? (result.firstStatus ?? 'applied') : result.status;
-  const table = tableFor(db, entry.entity);
   await db.transaction('rw', captureScope(db), async () => {
     if (status === 'applied' && entry.op === 'delete') {
       // The server confirmed the delete: only now does the record leave the tablet.
@@ -20,16 +19,15 @@ export async function applyResult(db: SitebandDb, entry: OutboxRow, result: Chan
       return;
     } else if (status === 'applied') {
       await db.outbox.delete(entry.seq!);
-      if (result.version !== undefined) await table.update(entry.id, { version: result.version });
+      await refreshSyncState(db, entry.entity, entry.id, result.version !== undefined ? { version: result.version } : {});
     } else if (status === 'conflict') {
       await db.outbox.update(entry.seq!, { status: 'conflict', lastError: result.reason ?? null });
       // A duplicate of a conflict carries no server copy: the next pull brings it.
-      if (result.server) await table.update(entry.id, { conflictServer: result.server });
+      await refreshSyncState(db, entry.entity, entry.id, result.server ? { conflictServer: result.server } : {});
     } else {
       await db.outbox.update(entry.seq!, { status: 'rejected', lastError: result.reason ?? 'Refused by the server' });
       // A refused delete brings the record back, with the reason shown on it.
-      if (entry.op === 'delete') await table.update(entry.id, { deletePending: undefined });
+      await refreshSyncState(db, entry.entity, entry.id, entry.op === 'delete' ? { deletePending: undefined } : {});
     }
-    await refreshSyncState(db, entry.entity, entry.id);
   });
 }

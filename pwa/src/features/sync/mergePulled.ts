@@ -18,13 +18,14 @@ export async function mergePulled(db: SitebandDb, record: ServerRecord, now = Da
     const local = await table.get(record.id);
     const entries = await entriesFor(db, entity, record.id);
     if (local && local.version === record.version && !record.deleted) {
-      // Our own write coming back (or an upload finishing): only the upload time may be new.
-      if (entity === 'attachment' && typeof record.data.uploadedAt === 'string') await db.photos.update(record.id, { uploadedAt: record.data.uploadedAt });
-      // ...or the server's recomputation of a scan, written with a new syncSeq at the same version.
-      if (entity === 'scan') await db.scans.update(record.id, { serverCheck: serverCheckOf(record.data) });
+      // Our own write coming back (or an upload finishing): only the upload time may be new,
+      // ...or the server's recomputation of a scan, written with a new syncSeq at the same version,
       // ...or a safety officer's acknowledgement, if the server keeps the version for it.
-      if (entity === 'escalation') await db.escalations.update(record.id, { serverState: escalationServerStateOf(record.data) });
-      await refreshSyncState(db, entity, record.id);
+      const changes: Record<string, unknown> = {};
+      if (entity === 'attachment' && typeof record.data.uploadedAt === 'string') changes.uploadedAt = record.data.uploadedAt;
+      if (entity === 'scan') changes.serverCheck = serverCheckOf(record.data);
+      if (entity === 'escalation') changes.serverState = escalationServerStateOf(record.data);
+      await refreshSyncState(db, entity, record.id, changes);
       return 'same';
     }
     if (local?.deletePending && record.deleted) {

@@ -82,8 +82,8 @@ async function noteFailure(db: SitebandDb, batch: OutboxRow[], message: string):
 /** Marks a change the server refused as a request as rejected, with its reason. */
 async function refuse(db: SitebandDb, entry: OutboxRow, reason: string): Promise<void> {
   await db.outbox.update(entry.seq!, { status: 'rejected', lastError: reason });
-  if (entry.op === 'delete') await tableFor(db, entry.entity).update(entry.id, { deletePending: undefined });
-  await refreshSyncState(db, entry.entity, entry.id);
+  // A refused delete brings the record back, with the reason shown on it.
+  await refreshSyncState(db, entry.entity, entry.id, entry.op === 'delete' ? { deletePending: undefined } : {});
 }
 
 /**

@@ -28,16 +28,28 @@ export function entriesFor(db: SitebandDb, entity: CaptureEntity, id: string): P
   return db.outbox.where('[entity+id]').equals([entity, id]).sortBy('seq');
 }
 
-/** Recomputes and stores a record's sync state; call inside the transaction that changed its outbox. */
-export async function refreshSyncState(db: SitebandDb, entity: CaptureEntity, id: string): Promise<void> {
+/**
+ * Recomputes and stores a record's sync state, with `changes` to its row written in the same update (one
+ * write per step, none when nothing differs); call inside the transaction that changed its outbox.
+ */
+export async function refreshSyncState(db: SitebandDb, entity: CaptureEntity, id: string, changes: Record<string, unknown> = {}): Promise<void> {
   const table = tableFor(db, entity);
-  const row = await table.get(id);
-  if (!row) return;
+  const stored = await table.get(id);
+  if (!stored) return;
+  const row = { ...stored, ...changes } as CaptureRow<unknown>;
   const entries = await entriesFor(db, entity, id);
   // A photo is on server only once its bytes are there too, not just its metadata.
   const photo = entity === 'attachment' ? (row as PhotoRow) : undefined;
-  const rejected = entries.find((e) => e.status === 'rejected')?.lastError ?? photo?.uploadRefused;
-  await table.update(id, { sync: deriveSyncState(row, entries, photo ? bytesState(photo) : 'none'), rejectedReason: rejected ?? undefined });
+  const sync = deriveSyncState(row, entries, photo ? bytesState(photo) : 'none');
+  const rejectedReason = entries.find((e) => e.status === 'rejected')?.lastError ?? photo?.uploadRefused ?? undefined;
+  const unchanged = (Object.keys(changes) as (keyof typeof stored)[]).every((key) => sameValue(stored[key], changes[key]));
+  if (unchanged && stored.sync === sync && stored.rejectedReason === rejectedReason) return;
+  await table.update(id, { ...changes, sync, rejectedReason });
+}
+
+/** True when a stored field already holds the value (compared as JSON: the values are plain data). */
+function sameValue(a: unknown, b: unknown): boolean {
+  return a === b || JSON.stringify(a) === JSON.stringify(b);
 }
 
 /** True when nothing the tablet holds waits for the server (no outbox entry, no photo bytes left to upload). */

@@ -22,16 +22,14 @@ function serverStatus(api: ApiClient, id: string): Promise<AttachmentStatus> {
 
 async function save(db: SitebandDb, id: string, status: AttachmentStatus): Promise<void> {
   await db.transaction('rw', [db.photos, db.outbox], async () => {
-    await db.photos.update(id, { receivedBytes: status.receivedBytes, uploadedAt: status.complete ? status.uploadedAt : null });
-    await refreshSyncState(db, 'attachment', id);
+    await refreshSyncState(db, 'attachment', id, { receivedBytes: status.receivedBytes, uploadedAt: status.complete ? status.uploadedAt : null });
   });
 }
 
 /** Keeps the server's reason beside the bytes: the file stays on the tablet, shown as not on server, never dropped. */
 async function refuse(db: SitebandDb, id: string, reason: string): Promise<void> {
   await db.transaction('rw', [db.photos, db.outbox], async () => {
-    await db.photos.update(id, { uploadRefused: reason });
-    await refreshSyncState(db, 'attachment', id);
+    await refreshSyncState(db, 'attachment', id, { uploadRefused: reason });
   });
 }
 
