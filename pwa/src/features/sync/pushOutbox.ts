@@ -58,15 +58,15 @@ async function prepare(db: SitebandDb, inFlight?: InFlight): Promise<Prepared> {
   const batch = await nextBatch(db, MAX_BATCH, inFlight);
   if (batch.length === 0) return { batch, changes: [] };
   const changes = await db.transaction('rw', captureScope(db), async () => {
-    const envelopes: ChangeEnvelope[] = [];
+    const sending: OutboxRow[] = [];
     for (const entry of batch) {
-      let baseVersion = entry.baseVersion;
-      if (entry.status === 'pending') baseVersion = (await tableFor(db, entry.entity).get(entry.id))?.version ?? null;
-      await db.outbox.update(entry.seq!, { status: 'sending', baseVersion, attempts: entry.attempts + 1 });
-      await refreshSyncState(db, entry.entity, entry.id);
-      envelopes.push({ changeId: entry.changeId, entity: entry.entity, op: entry.op, id: entry.id, baseVersion, ...(entry.op === 'upsert' ? { data: entry.data } : {}) });
+      const baseVersion = entry.status === 'pending' ? ((await tableFor(db, entry.entity).get(entry.id))?.version ?? null) : entry.baseVersion;
+      sending.push({ ...entry, status: 'sending', baseVersion, attempts: entry.attempts + 1 });
     }
-    return envelopes;
+    // The entries in hand, written back in one go (an update of each would read it again first).
+    await db.outbox.bulkPut(sending);
+    for (const entry of sending) await refreshSyncState(db, entry.entity, entry.id);
+    return sending.map(({ changeId, entity, op, id, baseVersion, data }): ChangeEnvelope => ({ changeId, entity, op, id, baseVersion, ...(op === 'upsert' ? { data } : {}) }));
   });
   return { batch, changes };
 }

@@ -44,7 +44,8 @@ export async function refreshSyncState(db: SitebandDb, entity: CaptureEntity, id
   const rejectedReason = entries.find((e) => e.status === 'rejected')?.lastError ?? photo?.uploadRefused ?? undefined;
   const unchanged = (Object.keys(changes) as (keyof typeof stored)[]).every((key) => sameValue(stored[key], changes[key]));
   if (unchanged && stored.sync === sync && stored.rejectedReason === rejectedReason) return;
-  await table.update(id, { ...changes, sync, rejectedReason });
+  // A put of the row in hand rather than an update, which would read it again.
+  await table.put({ ...row, sync, rejectedReason });
 }
 
 /** True when a stored field already holds the value (compared as JSON: the values are plain data). */
