@@ -8,7 +8,8 @@ import { after, before, describe, it } from 'node:test';
 import { blockingViolations } from './axe.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
 import { gradientPng, readCapture, waitForSynced } from './capture.mjs';
-import { apiToken, goOffline, signInTo, waitForPage } from './shell.mjs';
+import { caseOnServer } from './fieldCase.mjs';
+import { apiToken, goOffline, newCaseOnTablet, newSampleOnTablet, signInTo, waitForPage } from './shell.mjs';
 
 const SITE = `Lock keeper's store (e2e ${Date.now() % 100000})`;
 const sha256 = (bytes) => createHash('sha256').update(bytes).digest('hex');
@@ -35,17 +36,8 @@ export function caseArchiveTests({ baseUrl, password }) {
       const { page, context } = first;
       await signInTo(page, baseUrl, 'inspector@demo.test', password, 'Cases');
       await goOffline(page, context);
-      await page.getByTestId('new-case').filter({ visible: true }).click();
-      await waitForPage(page, 'New case');
-      await page.getByLabel('Site name', { exact: true }).fill(SITE);
-      await page.getByRole('button', { name: 'Save case' }).filter({ visible: true }).click();
-      await waitForPage(page, SITE);
-      caseId = page.url().split('/').pop();
-      await page.getByTestId('new-sample').filter({ visible: true }).click();
-      await waitForPage(page, 'New sample');
-      await page.getByLabel('Label', { exact: true }).filter({ visible: true }).fill('LK-01');
-      await page.getByRole('button', { name: 'Save sample' }).filter({ visible: true }).click();
-      await waitForPage(page, 'Sample LK-01');
+      caseId = await newCaseOnTablet(page, SITE);
+      await newSampleOnTablet(page, 'LK-01');
       await page.getByTestId('photo-input').filter({ visible: true }).setInputFiles([{ name: 'sack.png', mimeType: 'image/png', buffer: gradientPng(200, 160, 90) }]);
       await page.getByTestId('photo').filter({ visible: true }).first().waitFor();
       await page.goto(`${baseUrl}/tabs/cases/${caseId}`);
@@ -88,7 +80,7 @@ export function caseArchiveTests({ baseUrl, password }) {
       await page.getByTestId('case-import-unchanged').filter({ visible: true }).filter({ hasText: '3 records already here' }).waitFor();
       assert.equal(await page.getByTestId('case-import-imported').count(), 0);
 
-      const detail = await (await fetch(`${baseUrl}/api/cases/${caseId}`, { headers: { Authorization: `Bearer ${token}` } })).json();
+      const detail = await caseOnServer(baseUrl, token, caseId);
       assert.equal(detail.case.siteName, SITE);
       assert.deepEqual(detail.samples.map((s) => s.label), ['LK-01']);
       assert.equal(detail.attachments.length, 1);
@@ -113,7 +105,7 @@ export function caseArchiveTests({ baseUrl, password }) {
       await waitForSynced(page);
       await page.getByTestId('case-sync').filter({ visible: true }).filter({ hasText: 'On server' }).waitFor();
 
-      const detail = await (await fetch(`${baseUrl}/api/cases/${caseId}`, { headers: { Authorization: `Bearer ${token}` } })).json();
+      const detail = await caseOnServer(baseUrl, token, caseId);
       assert.equal(detail.samples.length, 1);
       assert.equal(detail.attachments.length, 1);
       assert.equal(detail.case.version, 1, 'no second write of the case');

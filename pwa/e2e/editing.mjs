@@ -10,7 +10,8 @@ import { after, before, describe, it } from 'node:test';
 import { blockingViolations } from './axe.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
 import { gradientPng, readCapture, waitForSynced } from './capture.mjs';
-import { apiToken, goOffline, signInTo, waitForPage } from './shell.mjs';
+import { caseOnServer } from './fieldCase.mjs';
+import { apiToken, goOffline, newCaseOnTablet, newSampleOnTablet, signInTo, waitForPage } from './shell.mjs';
 
 const SPECTRA = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'fixtures', 'spectra');
 const SITE = `Riverside solvent store (e2e ${Date.now() % 100000})`;
@@ -25,12 +26,6 @@ async function assertAccessible(page, where) {
 const noteWith = (page, text) => page.getByTestId('site-note').filter({ visible: true }).filter({ hasText: text });
 
 export function editingTests({ baseUrl, password }) {
-  async function caseOnServer(token, caseId) {
-    const response = await fetch(`${baseUrl}/api/cases/${caseId}`, { headers: { Authorization: `Bearer ${token}` } });
-    assert.equal(response.status, 200);
-    return response.json();
-  }
-
   describe('editing and deleting on an open case offline', { concurrency: false }, () => {
     let browser;
     let token;
@@ -48,13 +43,7 @@ export function editingTests({ baseUrl, password }) {
     it('records a case with a sample, two photos and two notes, and syncs them', async () => {
       const { page } = browser;
       await signInTo(page, baseUrl, 'inspector@demo.test', password, 'Cases');
-      await page.getByTestId('new-case').filter({ visible: true }).click();
-      await waitForPage(page, 'New case');
-      await page.getByLabel('Site name', { exact: true }).fill(SITE);
-      await page.getByLabel('Address', { exact: true }).fill('Mill Lane 3, Ashbury');
-      await page.getByRole('button', { name: 'Save case' }).filter({ visible: true }).click();
-      await waitForPage(page, SITE);
-      caseId = page.url().split('/').pop();
+      caseId = await newCaseOnTablet(page, SITE, { address: 'Mill Lane 3, Ashbury' });
       for (const text of ['Three unlabelled cans by the door.', 'Strong draught through the east window.']) {
         await page.getByLabel('New site note', { exact: true }).filter({ visible: true }).fill(text);
         await page.getByRole('button', { name: 'Add note' }).filter({ visible: true }).click();
@@ -76,7 +65,7 @@ export function editingTests({ baseUrl, password }) {
       await waitForPage(page, SITE);
       await page.getByTestId('sync-now').filter({ visible: true }).click();
       await waitForSynced(page);
-      const detail = await caseOnServer(token, caseId);
+      const detail = await caseOnServer(baseUrl, token, caseId);
       assert.deepEqual([detail.samples.length, detail.notes.length, detail.attachments.length], [1, 2, 2]);
     });
 
@@ -166,7 +155,7 @@ export function editingTests({ baseUrl, password }) {
       assert.equal(local.photos.some((p) => p.id === deletedPhoto), false);
       assert.equal(local.notes.filter((n) => n.caseId === caseId).length, 1);
 
-      const detail = await caseOnServer(token, caseId);
+      const detail = await caseOnServer(baseUrl, token, caseId);
       assert.equal(detail.case.address, 'Mill Lane 3a, Ashbury');
       assert.equal(detail.case.weatherNotes, 'Cold, dry, still air');
       assert.deepEqual(detail.samples.map((s) => [s.id, s.container, s.locationOnSite]), [[sampleId, 'Steel can, 5 L, dented', 'Shelf B, floor level']]);
@@ -209,21 +198,7 @@ export function editingTests({ baseUrl, password }) {
     async function newCase(page, site) {
       await page.goto(`${baseUrl}/tabs/cases`);
       await waitForPage(page, 'Cases');
-      await page.getByTestId('new-case').filter({ visible: true }).click();
-      await waitForPage(page, 'New case');
-      await page.getByLabel('Site name', { exact: true }).fill(site);
-      await page.getByRole('button', { name: 'Save case' }).filter({ visible: true }).click();
-      await waitForPage(page, site);
-      return page.url().split('/').pop();
-    }
-
-    async function newSample(page, label) {
-      await page.getByTestId('new-sample').filter({ visible: true }).click();
-      await waitForPage(page, 'New sample');
-      await page.getByLabel('Label', { exact: true }).filter({ visible: true }).fill(label);
-      await page.getByRole('button', { name: 'Save sample' }).filter({ visible: true }).click();
-      await waitForPage(page, `Sample ${label}`);
-      return page.url().split('/').pop();
+      return newCaseOnTablet(page, site);
     }
 
     it('records a case with a sample handed over and one not, and an empty case, and syncs them', async () => {
@@ -231,21 +206,21 @@ export function editingTests({ baseUrl, password }) {
       await signInTo(page, baseUrl, 'inspector@demo.test', password, 'Cases');
       emptyId = await newCase(page, EMPTY);
       yardId = await newCase(page, YARD);
-      heldSample = await newSample(page, 'TY-01');
+      heldSample = await newSampleOnTablet(page, 'TY-01');
       const custody = page.getByRole('form', { name: 'New hand-over' }).filter({ visible: true });
       await custody.getByLabel('Received by', { exact: true }).fill('Courier J. Demo');
       await custody.getByRole('button', { name: 'Record hand-over' }).click();
       await page.getByTestId('handovers').filter({ visible: true }).getByText('Courier J. Demo').waitFor();
       await page.goto(`${baseUrl}/tabs/cases/${yardId}`);
       await waitForPage(page, YARD);
-      freeSample = await newSample(page, 'TY-02');
+      freeSample = await newSampleOnTablet(page, 'TY-02');
       await page.goto(`${baseUrl}/tabs/cases/${yardId}`);
       await waitForPage(page, YARD);
       await page.getByTestId('sync-now').filter({ visible: true }).click();
       await waitForSynced(page);
-      const yard = await caseOnServer(token, yardId);
+      const yard = await caseOnServer(baseUrl, token, yardId);
       assert.deepEqual(yard.samples.map((s) => s.id).sort(), [heldSample, freeSample].sort());
-      assert.equal((await caseOnServer(token, emptyId)).case.siteName, EMPTY);
+      assert.equal((await caseOnServer(baseUrl, token, emptyId)).case.siteName, EMPTY);
     });
 
     it('offline, says plainly why a handed-over sample and a case with samples cannot go, and deletes a sample and an empty case after asking', async () => {
@@ -329,7 +304,7 @@ export function editingTests({ baseUrl, password }) {
 
       const gone = await fetch(`${baseUrl}/api/cases/${emptyId}`, { headers: { Authorization: `Bearer ${token}` } });
       assert.equal(gone.status, 404);
-      assert.deepEqual((await caseOnServer(token, yardId)).samples.map((s) => s.id), [heldSample]);
+      assert.deepEqual((await caseOnServer(baseUrl, token, yardId)).samples.map((s) => s.id), [heldSample]);
       const pulled = await (await fetch(`${baseUrl}/api/sync/pull?cursor=0&limit=1000`, { headers: { Authorization: `Bearer ${token}` } })).json();
       const tombstone = (id) => pulled.changes.find((c) => c.id === id);
       assert.equal(tombstone(emptyId)?.deleted, true);

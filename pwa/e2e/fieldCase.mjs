@@ -10,15 +10,11 @@ import { identifySpectrum, importSpectrum, scanResultRecord } from '@siteband/sh
 
 const SPECTRA = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'fixtures', 'spectra');
 
-/** Signs in through the API and gives the access token. */
-export async function apiToken(baseUrl, email, password) {
-  const response = await fetch(`${baseUrl}/api/auth/login`, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ email, password }),
-  });
-  assert.equal(response.status, 200, `sign-in of ${email} answered ${response.status}`);
-  return (await response.json()).accessToken;
+/** The case as the server gives it (`GET /api/cases/:id`, with its records); fails the test on anything but 200. */
+export async function caseOnServer(baseUrl, token, caseId) {
+  const response = await fetch(`${baseUrl}/api/cases/${caseId}`, { headers: { Authorization: `Bearer ${token}` } });
+  assert.equal(response.status, 200, `GET /api/cases/${caseId} answered ${response.status}`);
+  return response.json();
 }
 
 /**

@@ -6,8 +6,8 @@ import { readFile } from 'node:fs/promises';
 import { after, before, describe, it } from 'node:test';
 import { blockingViolations } from './axe.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
-import { apiToken, submitFieldCase } from './fieldCase.mjs';
-import { signInTo, waitForPage } from './shell.mjs';
+import { submitFieldCase } from './fieldCase.mjs';
+import { apiToken, signInTo, waitForPage } from './shell.mjs';
 
 async function assertAccessible(page, where) {
   assert.deepEqual(await blockingViolations(page), [], `axe found serious or critical problems on ${where}`);

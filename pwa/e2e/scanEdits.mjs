@@ -12,8 +12,8 @@ import { after, before, describe, it } from 'node:test';
 import { blockingViolations } from './axe.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
 import { gradientPng, readCapture, waitForSynced } from './capture.mjs';
-import { push } from './fieldCase.mjs';
-import { apiToken, goOffline, signInTo, waitForPage } from './shell.mjs';
+import { caseOnServer, push } from './fieldCase.mjs';
+import { apiToken, goOffline, newCaseOnTablet, newSampleOnTablet, signInTo, waitForPage } from './shell.mjs';
 
 const SPECTRA = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'fixtures', 'spectra');
 const FIXTURE = 'synthetic-ir-ethanol-liquid.csv';
@@ -26,12 +26,6 @@ async function assertAccessible(page, where) {
 }
 
 export function scanEditTests({ baseUrl, password }) {
-  async function caseOnServer(token, caseId) {
-    const response = await fetch(`${baseUrl}/api/cases/${caseId}`, { headers: { Authorization: `Bearer ${token}` } });
-    assert.equal(response.status, 200);
-    return response.json();
-  }
-
   describe('correcting a saved scan and captioning photos offline', { concurrency: false }, () => {
     let browser;
     let token;
@@ -52,18 +46,8 @@ export function scanEditTests({ baseUrl, password }) {
     it('records a sample with a captioned photo and an acknowledged IR scan, and syncs them', async () => {
       const { page } = browser;
       await signInTo(page, baseUrl, 'inspector@demo.test', password, 'Cases');
-      await page.getByTestId('new-case').filter({ visible: true }).click();
-      await waitForPage(page, 'New case');
-      await page.getByLabel('Site name', { exact: true }).fill(SITE);
-      await page.getByRole('button', { name: 'Save case' }).filter({ visible: true }).click();
-      await waitForPage(page, SITE);
-      caseId = page.url().split('/').pop();
-      await page.getByTestId('new-sample').filter({ visible: true }).click();
-      await waitForPage(page, 'New sample');
-      await page.getByLabel('Label', { exact: true }).filter({ visible: true }).fill('TY-01');
-      await page.getByRole('button', { name: 'Save sample' }).filter({ visible: true }).click();
-      await waitForPage(page, 'Sample TY-01');
-      sampleId = page.url().split('/').pop();
+      caseId = await newCaseOnTablet(page, SITE);
+      sampleId = await newSampleOnTablet(page, 'TY-01');
 
       await page.getByLabel('Caption for the photos you take now (optional)').filter({ visible: true }).fill(FIRST_CAPTION);
       await page.getByTestId('photo-input').filter({ visible: true }).setInputFiles({ name: 'drum.png', mimeType: 'image/png', buffer: gradientPng(320, 240, 60) });
@@ -87,7 +71,7 @@ export function scanEditTests({ baseUrl, password }) {
       await page.getByTestId('sync-now').filter({ visible: true }).click();
       const local = await waitForSynced(page);
       firstAcknowledgedAt = local.scans.find((s) => s.id === scanId).data.inspectorAcknowledgedAt;
-      const detail = await caseOnServer(token, caseId);
+      const detail = await caseOnServer(baseUrl, token, caseId);
       assert.equal(detail.attachments.find((a) => a.id === photoId)?.caption, FIRST_CAPTION);
       assert.deepEqual([detail.scans[0].phase, detail.scans[0].version], ['condensed', 1]);
     });
@@ -177,7 +161,7 @@ export function scanEditTests({ baseUrl, password }) {
 
       let detail;
       for (let attempt = 0; attempt < 150; attempt += 1) {
-        detail = await caseOnServer(token, caseId);
+        detail = await caseOnServer(baseUrl, token, caseId);
         if (detail.scans[0]?.serverRecomputedAt || detail.scans[0]?.serverRecomputeError) break;
         await page.waitForTimeout(200);
       }
@@ -191,7 +175,7 @@ export function scanEditTests({ baseUrl, password }) {
 
     it('a scan changed on another device and here shows both copies in words, and "keep mine" sends the tablet copy with its own acknowledgement', async () => {
       const { page, context } = browser;
-      const before = (await caseOnServer(token, caseId)).scans[0];
+      const before = (await caseOnServer(baseUrl, token, caseId)).scans[0];
       const fields = ['sampleId', 'technique', 'phase', 'excitationNm', 'recordedAt', 'instrumentCheckId', 'rawAttachmentId', 'rawSha256', 'parsedSummary', 'result', 'inspectorAcknowledgedAt'];
       const data = Object.fromEntries(fields.filter((f) => f in before && before[f] !== null).map((f) => [f, before[f]]));
       // Another tablet of the same inspector acknowledges the gas-phase result again.
@@ -237,7 +221,7 @@ export function scanEditTests({ baseUrl, password }) {
       await item.getByRole('button', { name: 'Keep mine' }).click();
       await page.getByTestId('sync-now').filter({ visible: true }).click();
       await waitForSynced(page);
-      const after = (await caseOnServer(token, caseId)).scans[0];
+      const after = (await caseOnServer(baseUrl, token, caseId)).scans[0];
       assert.deepEqual([after.phase, after.result.phase, after.version], ['condensed', 'condensed', before.version + 2]);
       assert.equal(new Date(after.inspectorAcknowledgedAt).toISOString(), mine.inspectorAcknowledgedAt, "the tablet's result with the tablet's acknowledgement");
       assert.deepEqual(browser.pageErrors, []);

@@ -9,7 +9,7 @@ import { fileURLToPath } from 'node:url';
 import { after, before, describe, it } from 'node:test';
 import { blockingViolations } from './axe.mjs';
 import { openBrowser, screenshot } from './browser.mjs';
-import { signInTo, waitForPage, waitForServiceWorker } from './shell.mjs';
+import { newCaseOnTablet, newSampleOnTablet, signInTo, waitForPage, waitForServiceWorker } from './shell.mjs';
 
 const FIXTURES = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'fixtures');
 const SITE = `Quay drain outfall (share e2e ${Date.now() % 100000})`;
@@ -51,16 +51,8 @@ export function shareTargetTests({ baseUrl, password }) {
       await signInTo(page, baseUrl, 'inspector@demo.test', password, 'Cases');
       await waitForServiceWorker(page);
 
-      await page.getByTestId('new-case').filter({ visible: true }).click();
-      await waitForPage(page, 'New case');
-      await page.getByLabel('Site name', { exact: true }).fill(SITE);
-      await page.getByRole('button', { name: 'Save case' }).filter({ visible: true }).click();
-      await waitForPage(page, SITE);
-      await page.getByTestId('new-sample').filter({ visible: true }).click();
-      await waitForPage(page, 'New sample');
-      await page.getByLabel('Label', { exact: true }).filter({ visible: true }).fill('QD-01');
-      await page.getByRole('button', { name: 'Save sample' }).filter({ visible: true }).click();
-      await waitForPage(page, 'Sample QD-01');
+      await newCaseOnTablet(page, SITE);
+      await newSampleOnTablet(page, 'QD-01');
       const sampleUrl = page.url();
 
       const scan = readFileSync(join(FIXTURES, 'spectra', SCAN_NAME));

@@ -131,6 +131,27 @@ export async function apiToken(baseUrl, email, password) {
   return (await login.json()).accessToken;
 }
 
+/** Makes a case on the tablet from the page showing the case list, as the inspector does; gives its id. */
+export async function newCaseOnTablet(page, site, { address } = {}) {
+  await page.getByTestId('new-case').filter({ visible: true }).click();
+  await waitForPage(page, 'New case');
+  await page.getByLabel('Site name', { exact: true }).fill(site);
+  if (address) await page.getByLabel('Address', { exact: true }).fill(address);
+  await page.getByRole('button', { name: 'Save case' }).filter({ visible: true }).click();
+  await waitForPage(page, site);
+  return page.url().split('/').pop();
+}
+
+/** Adds a sample to the case on screen, as the inspector does; gives its id. */
+export async function newSampleOnTablet(page, label) {
+  await page.getByTestId('new-sample').filter({ visible: true }).click();
+  await waitForPage(page, 'New sample');
+  await page.getByLabel('Label', { exact: true }).filter({ visible: true }).fill(label);
+  await page.getByRole('button', { name: 'Save sample' }).filter({ visible: true }).click();
+  await waitForPage(page, `Sample ${label}`);
+  return page.url().split('/').pop();
+}
+
 /** Takes the browser offline after the service worker controls the page, and waits for the app to say so. */
 export async function goOffline(page, context) {
   await waitForServiceWorker(page);

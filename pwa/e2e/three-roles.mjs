@@ -12,7 +12,7 @@ import { openBrowser, screenshot } from './browser.mjs';
 import { readCapture, waitForSynced } from './capture.mjs';
 import { recordHazardousScan } from './hazardousScan.mjs';
 import { waitForMail } from './inbox.mjs';
-import { signInTo, waitForPage } from './shell.mjs';
+import { newCaseOnTablet, newSampleOnTablet, signInTo, waitForPage } from './shell.mjs';
 
 async function assertAccessible(page, where) {
   assert.deepEqual(await blockingViolations(page), [], `axe found serious or critical problems on ${where}`);
@@ -48,18 +48,8 @@ export function threeRoleTests({ baseUrl, password }) {
     it("the inspector records a case with a hazardous Raman scan, submits it and syncs", async () => {
       const { page } = inspector;
       await signInTo(page, baseUrl, 'inspector@demo.test', password, 'Cases');
-      await page.getByTestId('new-case').filter({ visible: true }).click();
-      await waitForPage(page, 'New case');
-      await page.getByLabel('Site name', { exact: true }).fill(site);
-      await page.getByRole('button', { name: 'Save case' }).filter({ visible: true }).click();
-      await waitForPage(page, site);
-      caseId = page.url().split('/').pop();
-
-      await page.getByTestId('new-sample').filter({ visible: true }).click();
-      await waitForPage(page, 'New sample');
-      await page.getByLabel('Label', { exact: true }).filter({ visible: true }).fill('TR-01');
-      await page.getByRole('button', { name: 'Save sample' }).filter({ visible: true }).click();
-      await waitForPage(page, 'Sample TR-01');
+      caseId = await newCaseOnTablet(page, site);
+      await newSampleOnTablet(page, 'TR-01');
 
       scanId = await recordHazardousScan(page, 'TR-01');
 
