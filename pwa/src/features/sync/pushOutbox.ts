@@ -71,19 +71,15 @@ async function prepare(db: SitebandDb, inFlight?: InFlight): Promise<Prepared> {
   return { batch, changes };
 }
 
-/** What the server said of one change: its result, or a refusal of the change as a request (too large, malformed). */
-type Answer = { entry: OutboxRow; result: ChangeResult } | { entry: OutboxRow; refused: string };
+/** What the server said of one change; a change it refused as a request (too large, malformed) is answered rejected. */
+interface Answer {
+  entry: OutboxRow;
+  result: ChangeResult;
+}
 
 /** Notes a failed delivery on the changes of the batch; they stay sending, to be re-sent unchanged. */
 async function noteFailure(db: SitebandDb, batch: OutboxRow[], message: string): Promise<void> {
   await db.outbox.bulkUpdate(batch.map((entry) => ({ key: entry.seq!, changes: { lastError: message } })));
-}
-
-/** Marks a change the server refused as a request as rejected, with its reason. */
-async function refuse(db: SitebandDb, entry: OutboxRow, reason: string): Promise<void> {
-  await db.outbox.update(entry.seq!, { status: 'rejected', lastError: reason });
-  // A refused delete brings the record back, with the reason shown on it.
-  await refreshSyncState(db, entry.entity, entry.id, entry.op === 'delete' ? { deletePending: undefined } : {});
 }
 
 /**
@@ -106,7 +102,7 @@ async function send(db: SitebandDb, api: ApiClient, clientId: string, { batch, c
       throw error;
     }
     if (batch.length === 1) {
-      answers.push({ entry: batch[0], refused: reason });
+      answers.push({ entry: batch[0], result: { changeId: batch[0].changeId, status: 'rejected', reason } });
       return;
     }
     const half = Math.ceil(batch.length / 2);
@@ -129,8 +125,7 @@ async function send(db: SitebandDb, api: ApiClient, clientId: string, { batch, c
 async function act(db: SitebandDb, answers: Answer[], sent: number): Promise<number> {
   await db.transaction('rw', captureScope(db), async () => {
     for (const answer of answers) {
-      if ('result' in answer) await applyResult(db, answer.entry, answer.result);
-      else await refuse(db, answer.entry, answer.refused);
+      await applyResult(db, answer.entry, answer.result);
     }
   });
   if (answers.length < sent) throw new Error(`The server answered ${answers.length} of ${sent} changes; the others are sent again later`);
