@@ -20,6 +20,8 @@ const auth: AuthResponse = {
 };
 
 let db: SitebandDb;
+/** Who `/api/me` says is signed in: the same person the session holds. */
+let me: AuthResponse['user'];
 let store: SessionStore;
 let inboxLoads: number;
 let streamRequests: { authorization: string | null }[];
@@ -55,7 +57,7 @@ function renderInbox() {
     tokens: store,
     fetchFn: async (input, init) => {
       const path = String(input);
-      if (path === '/api/me') return new Response(JSON.stringify(auth.user), { status: 200, headers: { 'Content-Type': 'application/json' } });
+      if (path === '/api/me') return new Response(JSON.stringify(me), { status: 200, headers: { 'Content-Type': 'application/json' } });
       if (path === '/api/events') {
         streamRequests.push({ authorization: new Headers(init?.headers).get('Authorization') });
         return openStream();
@@ -83,6 +85,7 @@ beforeEach(async () => {
   db = await openDb(`siteband-events-${Math.random().toString(36).slice(2)}`);
   store = createSessionStore(sessionRowStorage(db));
   await store.save(auth);
+  me = auth.user;
   inboxLoads = 0;
   streamRequests = [];
   pushEvent = undefined;
@@ -112,7 +115,8 @@ describe('EventsProvider', () => {
   });
 
   it('stays off for an administrator, who has no case access', async () => {
-    await store.save({ ...auth, user: { ...auth.user, role: 'admin' } });
+    me = { ...auth.user, role: 'admin' };
+    await store.save({ ...auth, user: me });
     renderInbox();
     await waitFor(() => expect(screen.getByTestId('inbox').textContent).toBe('off:1'));
     expect(streamRequests).toEqual([]);
